@@ -1,0 +1,13 @@
+/** Jest configuration: ts-jest (transpile only; `npm run typecheck` checks types), one summary line at the end. */
+module.exports = {
+  testEnvironment: "node",
+  roots: ["<rootDir>/test"],
+  testMatch: ["**/*.test.ts"],
+  transform: {
+    "^.+\\.ts$": ["ts-jest", { isolatedModules: true, tsconfig: "tsconfig.json" }],
+  },
+  moduleFileExtensions: ["ts", "js", "json"],
+  setupFiles: ["<rootDir>/test/support/custom-functions-stub.ts"],
+  reporters: ["default", "<rootDir>/test/support/summary-reporter.js"],
+  testTimeout: 60000,
+};

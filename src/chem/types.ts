@@ -1,0 +1,132 @@
+/**
+ * The engine's vocabulary. Everything in src/chem works in mol/L, litres, kelvin or °C as named,
+ * and kJ/mol or J/(K·mol) for thermodynamic data. Units are converted once, at the boundary
+ * (src/chem/units), never inside the solvers.
+ *
+ * This file is the contract between the engine and its callers (src/library builds these objects
+ * from the constants library; src/functions and src/cli call the engine with them).
+ */
+
+/** Activity-coefficient model used for every charged species. */
+export type ActivityModel = "davies" | "ideal" | "debye-huckel";
+
+/** One stepwise dissociation HₙL → H⁺ + Hₙ₋₁L, thermodynamic (I = 0) at 25 °C. */
+export interface PkaStep {
+  /** pKa at 25 °C and zero ionic strength. */
+  pKa: number;
+  /** Standard reaction enthalpy ΔrH°, kJ/mol. Missing means unknown: treated as 0 with a warning above 5 K from 25 °C. */
+  dH?: number;
+  /** Standard reaction heat-capacity change ΔrCp°, J/(K·mol). Missing means 0 (van 't Hoff with constant ΔrH°). */
+  dCp?: number;
+}
+
+/**
+ * An acid–base system: the fully protonated species and its stepwise losses of protons.
+ * Bases are stored through their conjugate acids (NH₄⁺ → NH₃ with topCharge +1).
+ */
+export interface AcidBaseSystem {
+  /** Stable id, unique in a library (e.g. "phosphate"). */
+  id: string;
+  /** Display name (e.g. "phosphate"). */
+  name: string;
+  /** Charge of the fully protonated species (H₃PO₄: 0; NH₄⁺: +1; H₃His²⁺: +2). */
+  topCharge: number;
+  /** Stepwise dissociations in order of proton loss (pKa ascending in practice, not required). */
+  steps: PkaStep[];
+  /** Species names from fully protonated to fully deprotonated, length steps.length + 1. */
+  speciesNames?: string[];
+}
+
+/** A fully dissociated ion (Na⁺, K⁺, Cl⁻, Ca²⁺, NO₃⁻ …): it never takes or gives protons. */
+export interface StrongIon {
+  id: string;
+  name: string;
+  charge: number;
+}
+
+/**
+ * A substance as the engine sees it: what one mole of it puts into solution.
+ * Na₂HPO₄·7H₂O = 1 phosphate system + 2 Na⁺; HCl = 1 Cl⁻ (its proton is found by the charge
+ * balance); Tris = 1 Tris system; NaOH = 1 Na⁺; sucrose = 1 neutral particle.
+ * The protonation state of the form weighed in does not enter the equilibrium except through
+ * its counter-ions: the charge balance over system totals and strong ions fixes [H⁺].
+ */
+export interface Component {
+  id: string;
+  name: string;
+  /** Acid–base systems released per mole (borax Na₂B₄O₇·10H₂O: 4 mol borate). */
+  systems: { system: AcidBaseSystem; stoich: number }[];
+  /** Strong ions released per mole. */
+  ions: { ion: StrongIon; stoich: number }[];
+  /** Uncharged, non-reacting particles per mole (sucrose, mannitol): counted for osmolarity only. */
+  neutral?: number;
+  /** g/mol of the form weighed (hydrate water included), when known. */
+  molarMass?: number;
+  /** Protons the weighed form carries on its systems (Na₂HPO₄: 1 of 3), informational. */
+  protons?: number;
+}
+
+/** One entry of a mixture: a component at its concentration in the final solution. */
+export interface MixtureEntry {
+  component: Component;
+  /** mol/L in the final solution, ≥ 0. */
+  conc: number;
+}
+
+export type Mixture = MixtureEntry[];
+
+/** Options shared by every engine call. Defaults are defined once in src/chem/defaults.ts. */
+export interface ChemOptions {
+  /** °C, 0–100. Default 25. */
+  temperatureC?: number;
+  /** Default "davies". */
+  activity?: ActivityModel;
+}
+
+/** A species at equilibrium. */
+export interface Species {
+  name: string;
+  /** System id, or null for H⁺, OH⁻ and strong ions. */
+  systemId: string | null;
+  charge: number;
+  /** mol/L. */
+  conc: number;
+  /** Fraction of its system's total (1 for strong ions, H⁺ and OH⁻). */
+  fraction: number;
+}
+
+/** Which root the charge balance landed on. */
+export type Regime = "buffer" | "excess-strong-acid" | "excess-strong-base" | "no-buffer";
+
+export interface Equilibrium {
+  ok: true;
+  /** −log10 a(H⁺): what a calibrated meter reads. */
+  pH: number;
+  /** −log10 [H⁺] (concentration). */
+  pcH: number;
+  /** Ionic strength, mol/L, self-consistent with the speciation. */
+  ionicStrength: number;
+  /** Activity coefficient of H⁺ (and of any singly charged ion). */
+  gammaH: number;
+  /** Thermodynamic pKw at the temperature. */
+  pKw: number;
+  /** Buffer value β = dC(strong base)/dpH, mol/(L·pH), analytic at the solved state. */
+  beta: number;
+  species: Species[];
+  /** Charge-balance residual relative to the largest charge term. */
+  residual: number;
+  iterations: number;
+  regime: Regime;
+  /** Plain-language warnings (ionic strength beyond the activity model's range, missing ΔrH° …). */
+  warnings: string[];
+}
+
+export type FailureCode = "bad-input" | "no-convergence" | "unreachable" | "out-of-range" | "not-found";
+
+export interface Failure {
+  ok: false;
+  code: FailureCode;
+  message: string;
+}
+
+export type Result<T> = ({ ok: true } & T) | Failure;

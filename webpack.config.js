@@ -1,0 +1,82 @@
+/**
+ * Builds the add-in that runs inside Excel: the custom functions bundle (functions.js + the generated
+ * functions.json metadata) and the task pane (taskpane.html + taskpane.js), which share one runtime.
+ * HyperFormula (GPL) is used only by the command line in src/cli and never enters these bundles.
+ *
+ * `npm run build` needs no certificates. `npm start` (scripts/start.mjs) passes the development
+ * certificates through the PROTOLYTE_HTTPS_* environment variables for the HTTPS dev server.
+ */
+const path = require("path");
+const fs = require("fs");
+const HtmlWebpackPlugin = require("html-webpack-plugin");
+const CopyWebpackPlugin = require("copy-webpack-plugin");
+const CustomFunctionsMetadataPlugin = require("custom-functions-metadata-plugin");
+
+const PORT = 3000;
+
+function httpsOptions() {
+  const key = process.env.PROTOLYTE_HTTPS_KEY;
+  const cert = process.env.PROTOLYTE_HTTPS_CERT;
+  const ca = process.env.PROTOLYTE_HTTPS_CA;
+  if (!key || !cert) return undefined;
+  return {
+    key: fs.readFileSync(key),
+    cert: fs.readFileSync(cert),
+    ca: ca && fs.existsSync(ca) ? fs.readFileSync(ca) : undefined,
+  };
+}
+
+module.exports = (_env, argv) => {
+  const production = argv.mode === "production";
+  const https = httpsOptions();
+  return {
+    devtool: production ? false : "source-map",
+    entry: {
+      functions: "./src/functions/functions.ts",
+      taskpane: "./src/taskpane/taskpane.ts",
+    },
+    output: {
+      path: path.resolve(__dirname, "dist"),
+      filename: "[name].js",
+      clean: true,
+    },
+    resolve: { extensions: [".ts", ".js", ".json"] },
+    module: {
+      rules: [
+        {
+          test: /\.ts$/,
+          exclude: /node_modules/,
+          use: { loader: "ts-loader", options: { transpileOnly: true, compilerOptions: { module: "es2020", sourceMap: !production } } },
+        },
+      ],
+    },
+    performance: { hints: false },
+    plugins: [
+      new CustomFunctionsMetadataPlugin({ output: "functions.json", input: "./src/functions/functions.ts" }),
+      new HtmlWebpackPlugin({
+        filename: "taskpane.html",
+        template: "./src/taskpane/taskpane.html",
+        chunks: ["functions", "taskpane"],
+        inject: "body",
+        scriptLoading: "blocking",
+      }),
+      new CopyWebpackPlugin({
+        patterns: [
+          { from: "assets", to: "assets" },
+          { from: "manifest.xml", to: "manifest.xml" },
+          { from: "docs/functions", to: "help", noErrorOnMissing: true },
+        ],
+      }),
+    ],
+    devServer: {
+      port: PORT,
+      host: "localhost",
+      headers: { "Access-Control-Allow-Origin": "*" },
+      static: { directory: path.resolve(__dirname, "dist") },
+      server: https ? { type: "https", options: https } : "http",
+      client: { overlay: false },
+      hot: false,
+      liveReload: false,
+    },
+  };
+};
