@@ -130,3 +130,9 @@ export interface Failure {
 }
 
 export type Result<T> = ({ ok: true } & T) | Failure;
+
+/** A single number with its meaning given by the function that returns it (units in its doc). */
+export type ValueResult = Result<{ value: number }>;
+
+/** The fast path's answer: pH, p[H] and ionic strength only, no species list. */
+export type PHResult = Result<{ pH: number; pcH: number; ionicStrength: number }>;

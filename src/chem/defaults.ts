@@ -1,0 +1,39 @@
+/**
+ * The one place the engine's defaults and numerical settings live. Every other file imports them
+ * from here; the README quotes the same values.
+ */
+import type { ActivityModel } from "./types";
+
+export const DEFAULTS = {
+  /** °C: the reference temperature of every tabulated pKa (θ = 298.15 K). */
+  temperatureC: 25,
+  /** Activity model used when a caller gives none. */
+  activity: "davies" as ActivityModel,
+  /** Validity range of the water and activity formulas, °C (inclusive). */
+  minTemperatureC: 0,
+  maxTemperatureC: 100,
+  /** Largest total concentration of any one system, ion or neutral species accepted, mol/L (water itself is 55.5 mol/L). */
+  maxConcentration: 20,
+} as const;
+
+/** Numerical settings of the solvers. */
+export const SOLVER = {
+  /** Charge balance: stop when the Newton/bisection step in ln[H⁺] is below this (absolute, ln units). */
+  lnHTolerance: 1e-14,
+  /** Charge balance: iteration cap of the safeguarded Newton on ln[H⁺] (bisection alone needs < 110). */
+  maxChargeBalanceIterations: 200,
+  /** Ionic strength: stop when |I_new − I| ≤ this × I_new (self-consistency). */
+  ionicStrengthRelTolerance: 1e-12,
+  /** Ionic strength: iteration cap of the safeguarded fixed point (bisection alone needs < 100). */
+  maxIonicStrengthIterations: 150,
+} as const;
+
+/** Warning thresholds. */
+export const LIMITS = {
+  /** mol/L: above this the activity models lose accuracy (Davies 1962; REFERENCES §2 gives 0.3–0.5). */
+  ionicStrengthCaution: 0.3,
+  /** mol/L: above this the activity models are unreliable. */
+  ionicStrengthStrong: 0.5,
+  /** K: a pKa without ΔrH° is held at its 25 °C value; warn when |T − 25 °C| exceeds this. */
+  missingEnthalpyWarnK: 5,
+} as const;

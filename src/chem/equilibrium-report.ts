@@ -1,0 +1,82 @@
+/**
+ * Turns a solved ChargeBalanceSolver into the Equilibrium record: species, regime, residual,
+ * buffer value and warnings.
+ */
+import type { Aggregate } from "./aggregate";
+import { bufferValue } from "./beta";
+import { fail } from "./failure";
+import { LN10 } from "./physical-constants";
+import { classifyRegime } from "./regime";
+import type { ChargeBalanceSolver } from "./solver-core";
+import { speciesName } from "./species-names";
+import type { Equilibrium, Failure, Species } from "./types";
+import { pKw } from "./water";
+import { ionicStrengthWarning, missingEnthalpyWarnings } from "./warnings";
+
+export function buildEquilibrium(core: ChargeBalanceSolver, agg: Aggregate): Equilibrium | Failure {
+  const x = core.x;
+  const h = Math.exp(x);
+  const invH = 1 / h;
+  const oh = core.kwc * invH;
+  const species: Species[] = [
+    { name: "H+", systemId: null, charge: 1, conc: h, fraction: 1 },
+    { name: "OH-", systemId: null, charge: -1, conc: oh, fraction: 1 },
+  ];
+  let chargeSum = h - oh;
+  let largest = Math.max(h, oh);
+  for (const { ion, conc } of agg.ions) {
+    species.push({ name: ion.name, systemId: null, charge: ion.charge, conc, fraction: 1 });
+    chargeSum += ion.charge * conc;
+    largest = Math.max(largest, Math.abs(ion.charge * conc));
+  }
+  let hasSystem = false;
+  for (let s = 0; s < core.nSys; s++) {
+    const sys = agg.systems[s];
+    const C = core.totals[s];
+    if (C > 0) hasSystem = true;
+    const o = core.offset[s];
+    const n = core.nSteps[s];
+    // Relative amounts in log space: robust for any pKa/h combination, run once per report.
+    const logT: number[] = [0];
+    for (let k = 1; k <= n; k++) logT.push(logT[k - 1] + Math.log(core.kc[o + k - 1]) - x);
+    const top = Math.max(...logT);
+    const rel = logT.map((v) => Math.exp(v - top));
+    const sum = rel.reduce((a, b) => a + b, 0);
+    for (let k = 0; k <= n; k++) {
+      const fraction = rel[k] / sum;
+      const conc = C * fraction;
+      const charge = sys.topCharge - k;
+      species.push({ name: speciesName(sys, k), systemId: sys.id, charge, conc, fraction });
+      chargeSum += charge * conc;
+      largest = Math.max(largest, Math.abs(charge * conc));
+    }
+  }
+  const beta = bufferValue(core);
+  const gammaH = Math.exp(core.lnGamma1);
+  const pH = -(x + core.lnGamma1) / LN10;
+  const pcH = -x / LN10;
+  const I = core.ionicStrength;
+  if (![pH, pcH, I, beta, gammaH].every(Number.isFinite) || species.some((sp) => !Number.isFinite(sp.conc))) {
+    return fail("no-convergence", "The solver produced a non-finite value for this mixture; no result is given.");
+  }
+  const S = core.pMax;
+  const N = core.pMax - core.pMin;
+  const warnings: string[] = [];
+  const wI = ionicStrengthWarning(I, core.model);
+  if (wI) warnings.push(wI);
+  warnings.push(...missingEnthalpyWarnings(agg.systems, core.totals, core.temperatureC));
+  return {
+    ok: true,
+    pH,
+    pcH,
+    ionicStrength: I,
+    gammaH,
+    pKw: pKw(core.temperatureC),
+    beta,
+    species,
+    residual: Math.abs(chargeSum) / largest,
+    iterations: core.outerIterations,
+    regime: classifyRegime(hasSystem, S, N, h, oh),
+    warnings,
+  };
+}

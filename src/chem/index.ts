@@ -1,0 +1,35 @@
+/**
+ * Public API of the equilibrium engine (pure TypeScript: no Office API, no DOM).
+ * Units: mol/L, L, °C at the interface; kJ/mol for ΔrH°, J/(K·mol) for ΔrCp°.
+ */
+export type {
+  ActivityModel,
+  PkaStep,
+  AcidBaseSystem,
+  StrongIon,
+  Component,
+  MixtureEntry,
+  Mixture,
+  ChemOptions,
+  Species,
+  Regime,
+  Equilibrium,
+  FailureCode,
+  Failure,
+  Result,
+  ValueResult,
+  PHResult,
+} from "./types";
+export { DEFAULTS, SOLVER, LIMITS } from "./defaults";
+export { solveEquilibrium, solvePH } from "./equilibrium";
+export { prepare, PreparedMixture } from "./prepared";
+export { pKw, kw, pKwMarshallFranck, pKwIapws2006 } from "./water";
+export { waterDensity } from "./water-density";
+export { pKaAtTemperature, thermodynamicPKa } from "./temperature";
+export { debyeHuckelA, waterPermittivity } from "./activity/debye-huckel-a";
+export { daviesLog10Gamma } from "./activity/davies";
+export { debyeHuckelLog10Gamma, BATES_GUGGENHEIM_BA } from "./activity/debye-huckel";
+export { idealLog10Gamma } from "./activity/ideal";
+export { log10Gamma } from "./activity/model";
+export { apparentPKa, osmolarity, ionicStrength } from "./derived";
+export { classifyRegime } from "./regime";

@@ -1,0 +1,74 @@
+/**
+ * A mixture prepared once and solved many times (different temperatures or activity models).
+ * Preparation validates and aggregates the mixture and allocates the solver's arrays; each solve
+ * then allocates only its result. Results do not depend on earlier solves (every solve starts cold),
+ * so a cached preparation gives the same numbers as a fresh one.
+ */
+import { aggregate, type Aggregate } from "./aggregate";
+import { buildEquilibrium } from "./equilibrium-report";
+import { fail, fmt } from "./failure";
+import { LN10 } from "./physical-constants";
+import { ChargeBalanceSolver } from "./solver-core";
+import type { ChemOptions, Equilibrium, Failure, Mixture, PHResult } from "./types";
+import { resolveOptions } from "./validate-options";
+import { SOLVER } from "./defaults";
+
+export class PreparedMixture {
+  readonly ok = true as const;
+  readonly aggregate: Aggregate;
+  private readonly core: ChargeBalanceSolver;
+
+  constructor(agg: Aggregate) {
+    this.aggregate = agg;
+    let q = 0;
+    let zz = 0;
+    let abs = 0;
+    for (const { ion, conc } of agg.ions) {
+      q += ion.charge * conc;
+      zz += ion.charge * ion.charge * conc;
+      abs += Math.abs(ion.charge) * conc;
+    }
+    this.core = new ChargeBalanceSolver(agg.systems, agg.totals, q, 0.5 * zz, abs);
+  }
+
+  private run(opts?: ChemOptions): Failure | null {
+    const o = resolveOptions(opts);
+    if (!o.ok) return o;
+    this.core.setTemperature(o.temperatureC);
+    if (!this.core.solve(o.activity)) {
+      return fail(
+        "no-convergence",
+        `The ionic strength did not converge in ${SOLVER.maxIonicStrengthIterations} iterations (last I = ${fmt(this.core.ionicStrength)} mol/L); no result is given.`,
+      );
+    }
+    return null;
+  }
+
+  /** Full equilibrium: pH, speciation, ionic strength, β, regime, warnings. */
+  solve(opts?: ChemOptions): Equilibrium | Failure {
+    const bad = this.run(opts);
+    if (bad) return bad;
+    return buildEquilibrium(this.core, this.aggregate);
+  }
+
+  /** Fast path: pH, p[H] and ionic strength only. */
+  solvePH(opts?: ChemOptions): PHResult {
+    const bad = this.run(opts);
+    if (bad) return bad;
+    const x = this.core.x;
+    const pH = -(x + this.core.lnGamma1) / LN10;
+    const pcH = -x / LN10;
+    const ionicStrength = this.core.ionicStrength;
+    if (!Number.isFinite(pH) || !Number.isFinite(ionicStrength)) {
+      return fail("no-convergence", "The solver produced a non-finite value for this mixture; no result is given.");
+    }
+    return { ok: true, pH, pcH, ionicStrength };
+  }
+}
+
+/** Validates and aggregates a mixture for repeated solving. */
+export function prepare(mix: Mixture): PreparedMixture | Failure {
+  const agg = aggregate(mix);
+  if (!agg.ok) return agg;
+  return new PreparedMixture(agg);
+}

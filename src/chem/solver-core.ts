@@ -1,0 +1,295 @@
+/**
+ * The numerical core: the charge balance in ln[H⁺] at fixed conditional constants, and the
+ * ionic-strength iteration around it. One instance per prepared mixture; every array is allocated
+ * once, in the constructor, and the inner loops allocate nothing.
+ *
+ * Charge balance (x = ln h, h = [H⁺] in mol/L, conditional constants at the current I):
+ *   F(x) = h − K′w/h + Q + Σ_s C_s·(z0_s − D_s(h)) = 0,
+ * Q = Σ z·c over strong ions, z0 the charge of the fully protonated form, D_s = Σ k·α_k the mean
+ * number of protons the system has lost. dF/dx = h + K′w/h + Σ C_s·Var_s(k) > 0, so F is strictly
+ * increasing in x and has exactly one root.
+ *
+ * Bracket: 0 ≤ D_s ≤ n_s gives h − K′w/h + Pmin ≤ F ≤ h − K′w/h + Pmax with Pmax = Q + Σ C·z0 and
+ * Pmin = Pmax − Σ C·n, so the root lies between the water-only roots for Pmax and Pmin. A Newton step
+ * that leaves the bracket, or that does not halve |F|, is replaced by bisection: convergence is
+ * guaranteed, and quadratic near the root.
+ *
+ * Ionic strength: G(I) = I computed from the speciation solved at the constants for I. G(I_strong)
+ * ≥ I_strong (the strong ions alone), and G is bounded, so I = G(I) has a root in a bracket
+ * [lo, hi] found on the way. The iteration is a fixed point with adaptive damping (Wegstein, i.e. a
+ * secant step on G(I) − I), kept inside the bracket and replaced by bisection when it leaves it or
+ * stalls. It stops when |G(I) − I| ≤ 1e-12·G(I).
+ */
+import { activityShape, activityShapeDerivative } from "./activity/model";
+import { SOLVER } from "./defaults";
+import { LN10, ZERO_CELSIUS_K } from "./physical-constants";
+import { pKaAtTemperature } from "./temperature";
+import type { ActivityModel, AcidBaseSystem } from "./types";
+import { kw } from "./water";
+import { debyeHuckelA } from "./activity/debye-huckel-a";
+
+/** Smallest positive root of h − kwc/h + P = 0, computed without cancellation. */
+function waterRoot(P: number, kwc: number): number {
+  const s = Math.sqrt(P * P + 4 * kwc);
+  return P > 0 ? (2 * kwc) / (P + s) : (s - P) / 2;
+}
+
+const EPS = 2.220446049250313e-16;
+
+export class ChargeBalanceSolver {
+  readonly nSys: number;
+  readonly totals: Float64Array;
+  readonly topCharge: Float64Array;
+  readonly nSteps: Int32Array;
+  readonly offset: Int32Array;
+  readonly pKa25: Float64Array;
+  readonly dH: Float64Array;
+  readonly dCp: Float64Array;
+  /** Per step j (1-based within its system): z0 − j, the exponent of exp(2g) in the conditional constant. */
+  readonly stepExponent: Float64Array;
+  /** Thermodynamic Ka at the current temperature. */
+  readonly kaT: Float64Array;
+  /** Conditional (concentration) Ka at the current temperature and ionic strength. */
+  readonly kc: Float64Array;
+  /** Σ z·c of the strong ions, mol/L. */
+  readonly strongCharge: number;
+  /** ½ Σ z²·c of the strong ions, mol/L. */
+  readonly strongIonic: number;
+  /** Σ |z|·c of the strong ions plus Σ C·max|z| of the systems: the scale of the charge terms. */
+  readonly chargeScale: number;
+  readonly pMax: number;
+  readonly pMin: number;
+
+  temperatureC = NaN;
+  model: ActivityModel = "ideal";
+  kwT = NaN;
+  debyeA = NaN;
+  /** Ionic strength the conditional constants are set for, mol/L. */
+  ionicStrength = 0;
+  /** ln γ of a singly charged ion at `ionicStrength`. */
+  lnGamma1 = 0;
+  /** K′w = Kw/(γH·γOH). */
+  kwc = NaN;
+  /** Last solution of the charge balance, ln[H⁺]. */
+  x = NaN;
+  /** Outputs of evaluate(). */
+  F = NaN;
+  dF = NaN;
+  ionicFromSpeciation = NaN;
+  /** Counters of the last solve. */
+  evaluations = 0;
+  outerIterations = 0;
+
+  constructor(systems: AcidBaseSystem[], totals: number[], strongCharge: number, strongIonic: number, strongAbs: number) {
+    const n = systems.length;
+    this.nSys = n;
+    this.totals = Float64Array.from(totals);
+    this.topCharge = new Float64Array(n);
+    this.nSteps = new Int32Array(n);
+    this.offset = new Int32Array(n);
+    let steps = 0;
+    for (let s = 0; s < n; s++) {
+      this.offset[s] = steps;
+      this.nSteps[s] = systems[s].steps.length;
+      this.topCharge[s] = systems[s].topCharge;
+      steps += systems[s].steps.length;
+    }
+    this.pKa25 = new Float64Array(steps);
+    this.dH = new Float64Array(steps);
+    this.dCp = new Float64Array(steps);
+    this.stepExponent = new Float64Array(steps);
+    this.kaT = new Float64Array(steps);
+    this.kc = new Float64Array(steps);
+    let pMax = strongCharge;
+    let capacity = 0;
+    let scale = strongAbs;
+    for (let s = 0; s < n; s++) {
+      const sys = systems[s];
+      const C = this.totals[s];
+      const z0 = sys.topCharge;
+      const ns = sys.steps.length;
+      for (let j = 0; j < ns; j++) {
+        const i = this.offset[s] + j;
+        this.pKa25[i] = sys.steps[j].pKa;
+        this.dH[i] = sys.steps[j].dH ?? 0;
+        this.dCp[i] = sys.steps[j].dCp ?? 0;
+        this.stepExponent[i] = z0 - (j + 1);
+      }
+      pMax += C * z0;
+      capacity += C * ns;
+      scale += C * Math.max(Math.abs(z0), Math.abs(z0 - ns));
+    }
+    this.strongCharge = strongCharge;
+    this.strongIonic = strongIonic;
+    this.chargeScale = scale;
+    this.pMax = pMax;
+    this.pMin = pMax - capacity;
+  }
+
+  /** Sets Kw, A and every thermodynamic Ka for a temperature in °C (cached). */
+  setTemperature(temperatureC: number): void {
+    if (temperatureC === this.temperatureC) return;
+    const T = temperatureC + ZERO_CELSIUS_K;
+    for (let i = 0; i < this.kaT.length; i++) {
+      this.kaT[i] = Math.exp(-LN10 * pKaAtTemperature(this.pKa25[i], this.dH[i], this.dCp[i], T));
+    }
+    this.kwT = kw(temperatureC);
+    this.debyeA = debyeHuckelA(temperatureC);
+    this.temperatureC = temperatureC;
+  }
+
+  /** Sets the conditional constants for an ionic strength (mol/L) under the current model. */
+  setIonicStrength(I: number): void {
+    const g = -LN10 * this.debyeA * activityShape(this.model, I);
+    this.ionicStrength = I;
+    this.lnGamma1 = g;
+    const twoG = 2 * g;
+    for (let i = 0; i < this.kc.length; i++) this.kc[i] = this.kaT[i] * Math.exp(twoG * this.stepExponent[i]);
+    this.kwc = this.kwT * Math.exp(-twoG);
+  }
+
+  /** d ln γ1 / dI at the current ionic strength. */
+  lnGamma1Derivative(): number {
+    return -LN10 * this.debyeA * activityShapeDerivative(this.model, this.ionicStrength);
+  }
+
+  /** Evaluates F, dF/dx and the ionic strength of the speciation at x = ln[H⁺]. */
+  evaluate(x: number): void {
+    const h = Math.exp(x);
+    const invH = 1 / h;
+    const oh = this.kwc * invH;
+    let F = h - oh + this.strongCharge;
+    let dF = h + oh;
+    let zz = h + oh;
+    const totals = this.totals;
+    const kc = this.kc;
+    for (let s = 0; s < this.nSys; s++) {
+      const C = totals[s];
+      if (C === 0) continue;
+      const o = this.offset[s];
+      const n = this.nSteps[s];
+      const z0 = this.topCharge[s];
+      let t = 1;
+      let s0 = 1;
+      let s1 = 0;
+      let s2 = 0;
+      for (let k = 1; k <= n; k++) {
+        t *= kc[o + k - 1] * invH;
+        s0 += t;
+        s1 += k * t;
+        s2 += k * k * t;
+        if (t > 1e200) {
+          t *= 1e-200;
+          s0 *= 1e-200;
+          s1 *= 1e-200;
+          s2 *= 1e-200;
+        }
+      }
+      const inv = 1 / s0;
+      const D = s1 * inv;
+      const m2 = s2 * inv;
+      const v = m2 - D * D;
+      F += C * (z0 - D);
+      dF += C * (v > 0 ? v : 0);
+      zz += C * (z0 * z0 - 2 * z0 * D + m2);
+    }
+    this.F = F;
+    this.dF = dF;
+    this.ionicFromSpeciation = this.strongIonic + 0.5 * zz;
+    this.evaluations++;
+  }
+
+  /**
+   * Solves the charge balance at the current conditional constants, starting from xStart when it
+   * lies inside the bracket. Leaves the root in this.x and the evaluation at the root in F, dF,
+   * ionicFromSpeciation. Returns false only if the iteration cap is hit (not expected: bisection
+   * alone converges well within it).
+   */
+  solveLnH(xStart: number): boolean {
+    const kwc = this.kwc;
+    let xlo = Math.log(waterRoot(this.pMax, kwc));
+    let xhi = Math.log(waterRoot(this.pMin, kwc));
+    const tol = SOLVER.lnHTolerance;
+    let x = xStart > xlo && xStart < xhi ? xStart : 0.5 * (xlo + xhi);
+    if (xhi - xlo <= tol) {
+      this.x = x;
+      this.evaluate(x);
+      return true;
+    }
+    let lastAbsF = Infinity;
+    for (let it = 0; it < SOLVER.maxChargeBalanceIterations; it++) {
+      this.evaluate(x);
+      const F = this.F;
+      const absF = Math.abs(F);
+      const h = Math.exp(x);
+      const noise = 8 * EPS * (h + kwc / h + this.chargeScale);
+      if (absF <= noise) break;
+      if (F < 0) xlo = x;
+      else xhi = x;
+      let xn = x - F / this.dF;
+      if (!(xn > xlo && xn < xhi) || absF > 0.5 * lastAbsF) xn = 0.5 * (xlo + xhi);
+      lastAbsF = absF;
+      const step = Math.abs(xn - x);
+      x = xn;
+      if (step <= tol || xhi - xlo <= tol) {
+        this.evaluate(x);
+        this.x = x;
+        return true;
+      }
+    }
+    this.x = x;
+    return Math.abs(this.F) <= 8 * EPS * (Math.exp(x) + kwc / Math.exp(x) + this.chargeScale) || xhi - xlo <= tol;
+  }
+
+  /**
+   * Solves charge balance and ionic strength together for the current temperature and `model`.
+   * Returns true on convergence; the state (x, ionicStrength, kc, kwc, lnGamma1) is then the solution.
+   */
+  solve(model: ActivityModel): boolean {
+    this.model = model;
+    this.evaluations = 0;
+    this.outerIterations = 0;
+    let I = this.strongIonic;
+    this.setIonicStrength(I);
+    if (!this.solveLnH(NaN)) return false;
+    this.outerIterations = 1;
+    if (model === "ideal") {
+      this.setIonicStrength(this.ionicFromSpeciation);
+      return true;
+    }
+    let lo = I;
+    let hi = Infinity;
+    let prevI = NaN;
+    let prevG = NaN;
+    let lastAbsG = Infinity;
+    let Gv = this.ionicFromSpeciation;
+    const rtol = SOLVER.ionicStrengthRelTolerance;
+    for (let it = 1; it < SOLVER.maxIonicStrengthIterations; it++) {
+      const g = Gv - I;
+      if (Math.abs(g) <= rtol * Gv) {
+        // Converged: the state is the solution for I; report I as the ionic strength.
+        return true;
+      }
+      if (g > 0) lo = I > lo ? I : lo;
+      else hi = I < hi ? I : hi;
+      let In = Gv;
+      if (prevI === prevI && I !== prevI) {
+        const slope = (g - prevG) / (I - prevI);
+        if (slope < 0) In = I - g / slope;
+      }
+      const stalled = Math.abs(g) > 0.5 * lastAbsG;
+      if (!(In > lo && In < hi) || (stalled && hi !== Infinity)) {
+        In = hi === Infinity ? Gv : 0.5 * (lo + hi);
+      }
+      lastAbsG = Math.abs(g);
+      prevI = I;
+      prevG = g;
+      I = In;
+      this.setIonicStrength(I);
+      if (!this.solveLnH(this.x)) return false;
+      this.outerIterations = it + 1;
+      Gv = this.ionicFromSpeciation;
+    }
+    return false;
+  }
+}

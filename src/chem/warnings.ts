@@ -1,0 +1,31 @@
+/** Plain-language warnings attached to an equilibrium. */
+import { DEFAULTS, LIMITS } from "./defaults";
+import { fmt } from "./failure";
+import type { AcidBaseSystem, ActivityModel } from "./types";
+
+/** Ionic strength beyond the activity model's range. */
+export function ionicStrengthWarning(I: number, model: ActivityModel): string | null {
+  if (I > LIMITS.ionicStrengthStrong) {
+    return `Ionic strength ${fmt(I)} mol/L is above ${LIMITS.ionicStrengthStrong} mol/L: the ${model} activity model is unreliable here, treat the pH as a rough estimate.`;
+  }
+  if (I > LIMITS.ionicStrengthCaution) {
+    return `Ionic strength ${fmt(I)} mol/L is above ${LIMITS.ionicStrengthCaution} mol/L: the ${model} activity model loses accuracy here.`;
+  }
+  return null;
+}
+
+/** pKa steps without ΔrH° used away from 25 °C. */
+export function missingEnthalpyWarnings(systems: AcidBaseSystem[], totals: ArrayLike<number>, temperatureC: number): string[] {
+  const out: string[] = [];
+  if (Math.abs(temperatureC - DEFAULTS.temperatureC) <= LIMITS.missingEnthalpyWarnK) return out;
+  for (let s = 0; s < systems.length; s++) {
+    if (!(totals[s] > 0)) continue;
+    const missing = systems[s].steps.map((st, j) => (st.dH === undefined ? j + 1 : 0)).filter((j) => j > 0);
+    if (missing.length > 0) {
+      out.push(
+        `ΔrH° is unknown for ${systems[s].name} (step ${missing.join(", ")}): its pKa is held at the 25 °C value at ${fmt(temperatureC)} °C.`,
+      );
+    }
+  }
+  return out;
+}
