@@ -9,7 +9,8 @@ class SummaryReporter {
     const failed = results.numFailedTests + failedSuites;
     const skipped = results.numPendingTests + results.numTodoTests;
     const tail = skipped > 0 ? `, ${skipped} skipped` : "";
-    process.stdout.write(`\n${passed} passed, ${failed} failed${tail}\n`);
+    // Written at exit so it comes after jest's own summary and is the last line of the run.
+    process.once("exit", () => process.stdout.write(`\n${passed} passed, ${failed} failed${tail}\n`));
   }
 }
 module.exports = SummaryReporter;

@@ -1,0 +1,87 @@
+/**
+ * Headless evaluation with HyperFormula: one formula, or whole sheets of values and formulas.
+ * Results are plain data: a number, string or boolean, a table (rows of cells), or an error
+ * value with its message — the same things a user sees in Excel.
+ */
+import { DetailedCellError, HyperFormula, type RawCellContent } from "hyperformula";
+import { registerAqFunctions } from "./hf-plugin";
+
+export type CellResult = number | string | boolean | null | { error: string; message: string };
+
+export interface FormulaResult {
+  /** A scalar, or rows of cells for a spilled table. */
+  value?: CellResult | CellResult[][];
+  error?: string;
+  message?: string;
+}
+
+const CONFIG = { licenseKey: "gpl-v3", maxRows: 200_000, maxColumns: 1_000 } as const;
+
+function toResult(value: unknown): CellResult {
+  if (value instanceof DetailedCellError) return { error: value.value, message: value.message ?? "" };
+  if (value === null || value === undefined) return null;
+  if (typeof value === "number" || typeof value === "string" || typeof value === "boolean") return value;
+  return String(value);
+}
+
+/** Builds an engine holding the given sheets (name → rows of raw cell contents). */
+export function buildEngine(sheets: Record<string, RawCellContent[][]>): HyperFormula {
+  registerAqFunctions();
+  return HyperFormula.buildFromSheets(sheets, CONFIG);
+}
+
+/** Evaluates one formula as if typed in cell A1 of an empty sheet; a spilled result comes back as rows. */
+export function evaluateFormula(formula: string): FormulaResult {
+  const text = formula.trim().startsWith("=") ? formula.trim() : `=${formula.trim()}`;
+  const hf = buildEngine({ Sheet1: [[text]] });
+  try {
+    const sheetValues = hf.getSheetValues(0);
+    const first = toResult(sheetValues[0]?.[0]);
+    if (first !== null && typeof first === "object") return { error: first.error, message: first.message };
+    const spill = hf.getSheetDimensions(0);
+    if (spill.height === 1 && spill.width === 1) return { value: first };
+    const rows = sheetValues.map((row) => row.map(toResult));
+    return { value: rows };
+  } finally {
+    hf.destroy();
+  }
+}
+
+export interface SheetResult {
+  name: string;
+  /** Computed values, same layout as the input (spills filled in). */
+  values: CellResult[][];
+  /** Cells that evaluated to an error, with their A1 address and message. */
+  errors: { address: string; error: string; message: string }[];
+}
+
+export function columnName(index: number): string {
+  let n = index + 1;
+  let name = "";
+  while (n > 0) {
+    const r = (n - 1) % 26;
+    name = String.fromCharCode(65 + r) + name;
+    n = Math.floor((n - 1) / 26);
+  }
+  return name;
+}
+
+/** Evaluates every sheet of a workbook given as name → rows of raw contents. */
+export function evaluateSheets(sheets: Record<string, RawCellContent[][]>): SheetResult[] {
+  const hf = buildEngine(sheets);
+  try {
+    return Object.keys(sheets).map((name) => {
+      const id = hf.getSheetId(name) as number;
+      const values = hf.getSheetValues(id).map((row) => row.map(toResult));
+      const errors: SheetResult["errors"] = [];
+      values.forEach((row, r) =>
+        row.forEach((cell, c) => {
+          if (cell !== null && typeof cell === "object") errors.push({ address: `${columnName(c)}${r + 1}`, ...cell });
+        }),
+      );
+      return { name, values, errors };
+    });
+  } finally {
+    hf.destroy();
+  }
+}

@@ -1,0 +1,151 @@
+/**
+ * Registers the AQ custom functions in HyperFormula, so formulas evaluate headlessly exactly as a
+ * user types them in Excel. The function objects are the very ones Excel calls (src/functions/functions.ts);
+ * this adapter only converts HyperFormula's argument values to the shapes Excel passes
+ * (ranges as rows of columns, omitted arguments as null) and thrown CustomFunctions errors back to
+ * HyperFormula error values with their messages.
+ */
+import {
+  ArraySize,
+  CellError,
+  EmptyValue,
+  ErrorType,
+  FunctionArgumentType,
+  FunctionPlugin,
+  HyperFormula,
+  SimpleRangeValue,
+} from "hyperformula";
+import "../functions/runtime-shim";
+import { CATALOGUE, type CatalogueEntry } from "../functions/catalogue";
+
+type Ast = { args: unknown[] };
+type State = unknown;
+
+const ERROR_TYPES: Record<string, ErrorType> = {
+  "#VALUE!": ErrorType.VALUE,
+  "#N/A": ErrorType.NA,
+  "#DIV/0!": ErrorType.DIV_BY_ZERO,
+  "#NUM!": ErrorType.NUM,
+  "#NAME?": ErrorType.NAME,
+  "#REF!": ErrorType.REF,
+};
+
+class ArgumentError {
+  constructor(readonly error: CellError) {}
+}
+
+/** One HyperFormula scalar → what Excel would pass for an `any` parameter. */
+function toExcelScalar(value: unknown): unknown {
+  if (value === EmptyValue || value === undefined || value === null) return "";
+  if (value instanceof CellError) throw new ArgumentError(value);
+  if (typeof value === "object" && value !== null && "val" in value) return (value as { val: number }).val; // rich number (date, percent)
+  return value;
+}
+
+function toExcelArgument(value: unknown, optional: boolean): unknown {
+  if (value === undefined) return optional ? null : "";
+  if (value instanceof SimpleRangeValue) return value.data.map((row) => row.map(toExcelScalar));
+  return toExcelScalar(value);
+}
+
+function toHyperFormulaError(error: unknown): CellError {
+  if (error instanceof ArgumentError) return error.error;
+  if (error instanceof CustomFunctions.Error) {
+    return new CellError(ERROR_TYPES[error.code] ?? ErrorType.VALUE, error.message);
+  }
+  const detail = error instanceof Error ? error.message : String(error);
+  return new CellError(ErrorType.VALUE, `internal error: ${detail}`);
+}
+
+function toHyperFormulaScalar(value: unknown): unknown {
+  if (value === null || value === undefined) return "";
+  if (typeof value === "number" || typeof value === "string" || typeof value === "boolean") return value;
+  return String(value);
+}
+
+/** Calls the Excel function object with converted arguments; returns a value or throws. */
+function call(entry: CatalogueEntry, values: unknown[]): unknown {
+  const args = entry.params.map((p, i) => toExcelArgument(values[i], p.optional));
+  return entry.fn(...args);
+}
+
+function matrixOf(result: unknown): unknown[][] {
+  if (!Array.isArray(result) || !result.every(Array.isArray)) throw new Error("a table function returned something other than a matrix");
+  return result as unknown[][];
+}
+
+/** Pads or cuts a table to the size HyperFormula reserved for it. */
+function fit(rows: unknown[][], size: ArraySize): unknown[][] {
+  const out: unknown[][] = [];
+  for (let r = 0; r < size.height; r++) {
+    const row = rows[r] ?? [];
+    const cells: unknown[] = [];
+    for (let c = 0; c < size.width; c++) cells.push(toHyperFormulaScalar(row[c] ?? ""));
+    out.push(cells);
+  }
+  return out;
+}
+
+function buildPlugin(): typeof FunctionPlugin {
+  class AqPlugin extends FunctionPlugin {}
+  const implemented: Record<string, unknown> = {};
+  const proto = AqPlugin.prototype as unknown as Record<string, unknown>;
+  for (const entry of CATALOGUE) {
+    const name = `AQ.${entry.id}`;
+    const method = `aq_${entry.id.toLowerCase()}`;
+    const sizeMethod = `${method}_size`;
+    const parameters = entry.params.map((p) => ({ argumentType: FunctionArgumentType.ANY, optionalArg: p.optional }));
+
+    proto[method] = function (this: AqPlugin & { runFunction: Function; metadata: Function; arraySizeForAst: Function }, ast: Ast, state: State) {
+      return this.runFunction(ast.args, state, this.metadata(name), (...values: unknown[]) => {
+        try {
+          const result = call(entry, values);
+          if (entry.result === "scalar") return toHyperFormulaScalar(result);
+          const rows = matrixOf(result);
+          const size = sizeOf(rows);
+          return SimpleRangeValue.onlyValues(fit(rows, size) as never);
+        } catch (error) {
+          return toHyperFormulaError(error);
+        }
+      });
+    };
+
+    if (entry.result === "matrix") {
+      // HyperFormula reserves a spill area before evaluation: compute the table once to learn its size.
+      proto[sizeMethod] = function (this: AqPlugin & { evaluateAst: Function }, ast: Ast, state: State) {
+        try {
+          const values = ast.args.map((a) => (a === undefined ? undefined : this.evaluateAst(a, state)));
+          return sizeOf(matrixOf(call(entry, values)));
+        } catch {
+          return ArraySize.scalar();
+        }
+      };
+    }
+
+    implemented[name] = {
+      method,
+      parameters,
+      vectorizationForbidden: true,
+      ...(entry.result === "matrix" ? { sizeOfResultArrayMethod: sizeMethod } : {}),
+    };
+  }
+  (AqPlugin as unknown as { implementedFunctions: unknown }).implementedFunctions = implemented;
+  return AqPlugin;
+}
+
+function sizeOf(rows: unknown[][]): ArraySize {
+  const height = Math.max(1, rows.length);
+  const width = Math.max(1, ...rows.map((r) => r.length));
+  return new ArraySize(width, height);
+}
+
+let registered = false;
+
+/** Registers the AQ functions once per process (HyperFormula keeps a global plugin registry). */
+export function registerAqFunctions(): void {
+  if (registered) return;
+  const translations: Record<string, string> = {};
+  for (const entry of CATALOGUE) translations[`AQ.${entry.id}`] = `AQ.${entry.id}`;
+  HyperFormula.registerFunctionPlugin(buildPlugin() as never, { enGB: translations });
+  registered = true;
+}

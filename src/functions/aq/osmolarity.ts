@@ -1,0 +1,14 @@
+/**
+ * AQ.OSMOLARITY: ideal osmolarity, osmol/L — every dissolved particle at equilibrium (all species of
+ * every system, strong ions, H⁺, OH⁻, non-electrolytes), with an osmotic coefficient of 1.
+ */
+import { osmolarity as idealOsmolarity } from "../../chem";
+import type { Cell } from "../args";
+import { finite, orThrow } from "../errors";
+import { readMixture } from "../mixture";
+import { chemOptions } from "./options";
+
+export function osmolarity(names: Cell, amounts: Cell, temperature: Cell): number {
+  const { mixture } = readMixture(names, amounts);
+  return finite(orThrow(idealOsmolarity(mixture, chemOptions(temperature))).value, "osmolarity");
+}

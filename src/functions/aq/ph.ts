@@ -1,0 +1,11 @@
+/** AQ.PH: pH (−log10 a(H⁺)) of a mixture. */
+import type { Cell } from "../args";
+import { finite, orThrow } from "../errors";
+import { readMixture } from "../mixture";
+import { chemOptions } from "./options";
+
+export function ph(names: Cell, amounts: Cell, temperature: Cell, activity: Cell): number {
+  const { prepared } = readMixture(names, amounts);
+  const result = orThrow(prepared.solvePH(chemOptions(temperature, activity)));
+  return finite(result.pH, "pH");
+}

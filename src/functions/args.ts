@@ -1,0 +1,115 @@
+/**
+ * Reading spreadsheet arguments. Excel passes ranges as rows of columns (even one cell), omitted
+ * optional arguments as null, and empty cells as "" (or 0 for number ranges). Every problem becomes
+ * a #VALUE! error whose message names the argument, the cell and what is wrong.
+ */
+import { parseQuantity } from "../chem";
+import type { ActivityModel } from "../chem/types";
+import { badInput } from "./errors";
+
+export type Cell = unknown;
+
+export function isBlank(value: Cell): boolean {
+  return value === null || value === undefined || (typeof value === "string" && value.trim() === "");
+}
+
+/** A range or single value as a flat list in reading order (row by row), with cell positions. */
+export function cellsOf(value: Cell): { value: Cell; row: number; col: number }[] {
+  if (!Array.isArray(value)) return [{ value, row: 0, col: 0 }];
+  const out: { value: Cell; row: number; col: number }[] = [];
+  value.forEach((row, r) => {
+    if (Array.isArray(row)) row.forEach((v, c) => out.push({ value: v, row: r, col: c }));
+    else out.push({ value: row, row: r, col: 0 });
+  });
+  return out;
+}
+
+export function shapeOf(value: Cell): [number, number] {
+  if (!Array.isArray(value)) return [1, 1];
+  const rows = value.length;
+  const cols = rows === 0 ? 0 : Math.max(...value.map((r) => (Array.isArray(r) ? r.length : 1)));
+  return [rows, cols];
+}
+
+/** "item 3" for a flat list, "row 2, column 1" for a table — counted from 1 as a user counts. */
+export function position(row: number, col: number, shape: [number, number]): string {
+  if (shape[0] === 1 && shape[1] === 1) return "";
+  if (shape[1] === 1) return ` (item ${row + 1})`;
+  if (shape[0] === 1) return ` (item ${col + 1})`;
+  return ` (row ${row + 1}, column ${col + 1})`;
+}
+
+/** A text cell, trimmed; numbers are accepted as text (a substance could be named "2"). */
+export function text(value: Cell, what: string): string {
+  if (typeof value === "string") return value.trim();
+  if (typeof value === "number" || typeof value === "boolean") return String(value);
+  throw badInput(`${what} must be text`);
+}
+
+function describe(value: Cell): string {
+  if (typeof value === "string") return `'${value.length > 40 ? `${value.slice(0, 37)}...` : value}'`;
+  return String(value);
+}
+
+/**
+ * A number or unit text converted to the engine's unit (mol/L, L, °C, mol). Blank or omitted gives
+ * the default when there is one.
+ */
+export function quantity(
+  value: Cell,
+  what: string,
+  dimension: "concentration" | "volume" | "temperature" | "amount",
+  options: { fallback?: number; molarMass?: number } = {},
+): number {
+  if (isBlank(value)) {
+    if (options.fallback !== undefined) return options.fallback;
+    throw badInput(`${what} is missing`);
+  }
+  if (typeof value === "boolean") throw badInput(`${what} must be a number, not ${value ? "TRUE" : "FALSE"}`);
+  if (typeof value !== "number" && typeof value !== "string") throw badInput(`${what} must be a number or a quantity with a unit`);
+  const parsed = parseQuantity(value, dimension, { molarMass: options.molarMass });
+  if (!parsed.ok) throw badInput(`${what} ${describe(value)}: ${parsed.message}`);
+  return parsed.value;
+}
+
+/** A plain number (no units), e.g. a pH or a count. */
+export function plainNumber(value: Cell, what: string, fallback?: number): number {
+  if (isBlank(value)) {
+    if (fallback !== undefined) return fallback;
+    throw badInput(`${what} is missing`);
+  }
+  const n = typeof value === "number" ? value : typeof value === "string" ? Number(value.trim()) : NaN;
+  if (!Number.isFinite(n)) throw badInput(`${what} must be a number, got ${describe(value)}`);
+  return n;
+}
+
+export const TEMPERATURE_MIN_C = 0;
+export const TEMPERATURE_MAX_C = 100;
+
+/** Temperature in °C (number or "37 degC", "310 K"), 0–100 °C, default 25. */
+export function temperature(value: Cell): number {
+  const t = quantity(value, "temperature", "temperature", { fallback: 25 });
+  if (t < TEMPERATURE_MIN_C || t > TEMPERATURE_MAX_C) {
+    throw badInput(`temperature ${t} °C is outside 0–100 °C, the range the constants are valid for`);
+  }
+  return t;
+}
+
+const ACTIVITY_NAMES: Record<string, ActivityModel> = {
+  davies: "davies",
+  ideal: "ideal",
+  none: "ideal",
+  "debye-huckel": "debye-huckel",
+  "debye-hückel": "debye-huckel",
+  "debye huckel": "debye-huckel",
+  "extended debye-huckel": "debye-huckel",
+};
+
+/** "davies" (default), "ideal" or "debye-huckel". */
+export function activity(value: Cell): ActivityModel {
+  if (isBlank(value)) return "davies";
+  const key = text(value, "activity").toLowerCase();
+  const model = ACTIVITY_NAMES[key];
+  if (model === undefined) throw badInput(`activity '${key}' is not known: use "davies", "ideal" or "debye-huckel"`);
+  return model;
+}

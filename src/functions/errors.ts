@@ -1,0 +1,73 @@
+/**
+ * The one place where failures become spreadsheet errors.
+ *
+ * Excel shows a custom message only on #VALUE! and #N/A, so:
+ * - bad input (unknown substance, mismatched ranges, negative amounts, temperature out of range) → #VALUE!
+ * - a target that cannot be reached, a species not in the mixture → #N/A
+ * Anything unexpected becomes #VALUE! with "internal error" so a cell never shows a number we do not trust.
+ */
+import type { Failure } from "../chem/types";
+
+export type ErrorKind = "value" | "na";
+
+/** A failure the user can act on, with the message the cell shows. */
+export class AqError extends Error {
+  readonly kind: ErrorKind;
+  constructor(kind: ErrorKind, message: string) {
+    super(message);
+    this.kind = kind;
+    this.name = "AqError";
+  }
+}
+
+export function badInput(message: string): AqError {
+  return new AqError("value", message);
+}
+
+export function notAvailable(message: string): AqError {
+  return new AqError("na", message);
+}
+
+/** Engine failure codes: an unreachable target or a missing species is #N/A, everything else #VALUE!. */
+export function fromFailure(failure: Failure): AqError {
+  const kind: ErrorKind = failure.code === "unreachable" || failure.code === "not-found" ? "na" : "value";
+  return new AqError(kind, failure.message);
+}
+
+/** Unwraps an engine result or throws the matching AqError. */
+export function orThrow<T extends { ok: boolean }>(result: T | Failure): Exclude<T, Failure> {
+  if (!result.ok) throw fromFailure(result as Failure);
+  return result as Exclude<T, Failure>;
+}
+
+/** A finite number or a #VALUE! error: a cell never shows NaN or Infinity. */
+export function finite(value: number, what: string): number {
+  if (!Number.isFinite(value)) throw new AqError("value", `internal error: ${what} is not a finite number`);
+  return value;
+}
+
+/** Messages show in a tooltip: keep them one line and reasonably short. */
+function tidy(message: string): string {
+  const oneLine = message.replace(/\s+/g, " ").trim();
+  return oneLine.length > 250 ? `${oneLine.slice(0, 247)}...` : oneLine;
+}
+
+/** Converts anything thrown inside a function into the `CustomFunctions.Error` Excel displays. */
+export function toCustomFunctionsError(error: unknown): CustomFunctions.Error {
+  if (error instanceof CustomFunctions.Error) return error;
+  if (error instanceof AqError) {
+    const code = error.kind === "na" ? CustomFunctions.ErrorCode.notAvailable : CustomFunctions.ErrorCode.invalidValue;
+    return new CustomFunctions.Error(code, tidy(error.message));
+  }
+  const detail = error instanceof Error ? error.message : String(error);
+  return new CustomFunctions.Error(CustomFunctions.ErrorCode.invalidValue, tidy(`internal error: ${detail}`));
+}
+
+/** Runs a function body and rethrows any failure as the spreadsheet error to display. */
+export function guard<T>(body: () => T): T {
+  try {
+    return body();
+  } catch (error) {
+    throw toCustomFunctionsError(error);
+  }
+}
