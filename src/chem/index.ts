@@ -33,3 +33,4 @@ export { idealLog10Gamma } from "./activity/ideal";
 export { log10Gamma } from "./activity/model";
 export { apparentPKa, osmolarity, ionicStrength } from "./derived";
 export { classifyRegime } from "./regime";
+export { parseQuantity, type QuantityDimension, type ParseOptions } from "./units";
