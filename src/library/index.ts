@@ -1,0 +1,15 @@
+/**
+ * Public API of the constants library. See README.md in this folder for the file format and the
+ * layering.
+ */
+export * from "./types";
+export { BUILTIN_LIBRARY, BUILTIN_VERSION } from "./builtin";
+export { createLibrary } from "./layers";
+export type { Library, LibraryLayers, LayerDocs, LayerIssue, MergedEntry, ResolveResult } from "./layers";
+export { normalizeName } from "./normalize";
+export type { Suggestion } from "./suggest";
+export { parseFormula, molarMassOf } from "./formula";
+export { validateLibraryDoc } from "./validate";
+export type { ValidationResult, ValidationCode } from "./validate";
+export { formatIssue } from "./validate/paths";
+export { computeFingerprint } from "./fingerprint";

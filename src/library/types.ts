@@ -1,0 +1,118 @@
+/**
+ * The library file format (schemaVersion 1) as TypeScript types, and the typed results of the
+ * library API. The JSON Schema in schema/library.schema.json is the authority for the format;
+ * these types mirror it.
+ */
+
+export const LIBRARY_FORMAT = "protolyte-library";
+export const SCHEMA_VERSION = 1;
+
+/** How a value is known. */
+export type ValueStatus = "published" | "common-practice" | "unverified";
+
+/** A number with its unit, conditions and provenance. */
+export interface ValueRecord {
+  value: number;
+  unit: string;
+  /** e.g. "25 °C, I = 0". */
+  conditions: string;
+  /** Key into `sources`; required when status is "published". */
+  source?: string;
+  /** Where in the source: "Table 2", "entry: acetic acid". */
+  locator?: string;
+  status: ValueStatus;
+  /** Required for "common-practice" and "unverified": the reason. */
+  note?: string;
+}
+
+export interface SourceRecord {
+  kind?: "paper" | "book" | "handbook" | "standard" | "data-compilation" | "web" | "other";
+  authors?: string;
+  title: string;
+  /** Journal, book or series. */
+  container?: string;
+  edition?: string;
+  volume?: string;
+  pages?: string;
+  year?: number;
+  doi?: string;
+  url?: string;
+  /** How locators in value records point into this source. */
+  locators?: string;
+  note?: string;
+}
+
+export interface StepRecord {
+  pKa: ValueRecord;
+  dH?: ValueRecord;
+  dCp?: ValueRecord;
+}
+
+export interface SystemRecord {
+  id: string;
+  name: string;
+  topCharge: number;
+  speciesNames?: string[];
+  steps: StepRecord[];
+  note?: string;
+}
+
+export interface IonRecord {
+  id: string;
+  name: string;
+  formula?: string;
+  charge: number;
+  note?: string;
+}
+
+export type SubstanceNature = "weak-acid-base" | "strong-acid" | "strong-base" | "neutral-salt" | "non-electrolyte";
+export type PhysicalState = "solid" | "liquid" | "solution" | "gas";
+
+export interface SubstanceRecord {
+  id: string;
+  name: string;
+  aliases?: string[];
+  /** Hill-ish formula of the form weighed, hydrate water included: "Na2HPO4·7H2O". */
+  formula?: string;
+  /** False when the formula is shared by another substance (sucrose/trehalose): not a lookup name. */
+  formulaAlias?: boolean;
+  /** Only for entries without a formula (user entries); built-in masses are computed. */
+  molarMass?: ValueRecord;
+  nature: SubstanceNature;
+  state?: PhysicalState;
+  /** Systems released per mole; `protons` = dissociable protons the weighed form carries on them, per mole of substance. */
+  systems?: { system: string; stoich: number; protons: number }[];
+  ions?: { ion: string; stoich: number }[];
+  neutral?: number;
+  /** H⁺ released outright per mole (strong acid proton, PIPES sulfonic acid). Checked for charge balance only. */
+  freeH?: number;
+  /** OH⁻ released outright per mole (NaOH). Checked for charge balance only. */
+  freeOH?: number;
+  note?: string;
+}
+
+/** A library file (and a layer): our own public format. */
+export interface LibraryDoc {
+  format: typeof LIBRARY_FORMAT;
+  schemaVersion: typeof SCHEMA_VERSION;
+  name: string;
+  version?: string;
+  description?: string;
+  sources?: Record<string, SourceRecord>;
+  atomicWeights?: Record<string, ValueRecord>;
+  systems?: SystemRecord[];
+  ions?: IonRecord[];
+  substances?: SubstanceRecord[];
+}
+
+/** One problem a person can act on: "substances[3].aliases[0]: duplicate of 'tris' used by tris-base". */
+export interface ValidationIssue {
+  path: string;
+  message: string;
+}
+
+export type LayerName = "builtin" | "workbook" | "personal";
+/** Lowest first: a later layer overrides an earlier one. */
+export const LAYER_ORDER: readonly LayerName[] = ["builtin", "workbook", "personal"];
+
+export type EntryKind = "source" | "atomicWeight" | "system" | "ion" | "substance";

@@ -1,0 +1,59 @@
+/**
+ * Validation of a library file at run time: unsafe keys, then the JSON Schema (interpreted by
+ * schema-check.ts from the schema file itself), then the semantic checks. The result lists every
+ * problem as {path, message}.
+ */
+import schemaJson from "../schema/library.schema.json";
+import type { LibraryDoc, ValidationIssue } from "../types";
+import { LIBRARY_FORMAT, SCHEMA_VERSION } from "../types";
+import { formatIssue } from "./paths";
+import { checkAgainstSchema, type Schema } from "./schema-check";
+import { checkSemantics } from "./semantics";
+import { findUnsafeKeys } from "./unsafe-keys";
+
+export const LIBRARY_SCHEMA = schemaJson as unknown as Schema;
+
+export type ValidationCode = "unsafe-key" | "wrong-format" | "newer-version" | "wrong-version" | "invalid";
+
+export type ValidationResult =
+  | { ok: true; doc: LibraryDoc }
+  | { ok: false; code: ValidationCode; message: string; errors: ValidationIssue[] };
+
+function failure(code: ValidationCode, lead: string, errors: ValidationIssue[]): ValidationResult {
+  const shown = errors.slice(0, 3).map(formatIssue).join("; ");
+  const more = errors.length > 3 ? ` (and ${errors.length - 3} more)` : "";
+  return { ok: false, code, message: `${lead}: ${shown}${more}`, errors };
+}
+
+/** Structural check only (the JSON Schema), for tests comparing with ajv. */
+export function checkShape(value: unknown): ValidationIssue[] {
+  return checkAgainstSchema(LIBRARY_SCHEMA, value);
+}
+
+/**
+ * Validate an untrusted value as a library file. References (sources, systems, ions, elements) may
+ * point into `context`, the layers it will sit on.
+ */
+export function validateLibraryDoc(value: unknown, context: readonly LibraryDoc[] = []): ValidationResult {
+  const unsafe = findUnsafeKeys(value);
+  if (unsafe.length) return failure("unsafe-key", "refused", unsafe);
+  const top = typeof value === "object" && value !== null && !Array.isArray(value) ? (value as Record<string, unknown>) : null;
+  if (!top || top.format !== LIBRARY_FORMAT) {
+    return failure("wrong-format", "not a Protolyte library file", [{ path: "format", message: `must be '${LIBRARY_FORMAT}'` }]);
+  }
+  const v = top.schemaVersion;
+  if (typeof v === "number" && Number.isInteger(v) && v > SCHEMA_VERSION) {
+    return failure("newer-version", "made by a newer Protolyte", [
+      { path: "schemaVersion", message: `is ${v}; this version reads schemaVersion ${SCHEMA_VERSION}. Update Protolyte to open it.` },
+    ]);
+  }
+  if (v !== SCHEMA_VERSION) {
+    return failure("wrong-version", "unsupported schema version", [{ path: "schemaVersion", message: `must be ${SCHEMA_VERSION}, found ${JSON.stringify(v)}` }]);
+  }
+  const shape = checkShape(value);
+  if (shape.length) return failure("invalid", "invalid library", shape);
+  const doc = value as LibraryDoc;
+  const semantic = checkSemantics(doc, context);
+  if (semantic.length) return failure("invalid", "invalid library", semantic);
+  return { ok: true, doc };
+}
