@@ -13,3 +13,5 @@ export { validateLibraryDoc } from "./validate";
 export type { ValidationResult, ValidationCode } from "./validate";
 export { formatIssue } from "./validate/paths";
 export { computeFingerprint } from "./fingerprint";
+export { getActiveLibrary, setLayer, reportLayerProblem, getLayerProblems, onLibraryChange, resetActiveLibrary } from "./active";
+export type { UserLayer, LayerProblem, SetLayerResult } from "./active";

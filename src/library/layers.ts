@@ -54,7 +54,8 @@ export interface Library {
   list(kind?: EntryKind): MergedEntry[];
   /** The entry in effect with this id (default kind: substance). */
   get(id: string, kind?: EntryKind): MergedEntry | undefined;
-  system(id: string): AcidBaseSystem | undefined;
+  /** An acid–base system by id, or by id or name written loosely ("Bis Tris", "PHOSPHATE"). */
+  system(idOrName: string): AcidBaseSystem | undefined;
   ion(id: string): StrongIon | undefined;
   /** "PL-1.0.0-3fa9c21b07": the constants in effect. */
   fingerprint(): string;
@@ -94,6 +95,9 @@ export function createLibrary(input: LibraryLayers): Library {
     issues.forEach((i) => problems.push({ ...i, layer: e.layer, severity: "error" }));
     systems.set(e.id, toSystem(e.record));
   }
+  const systemsByKey = new Map<string, AcidBaseSystem>();
+  for (const sys of systems.values()) if (!systemsByKey.has(normalizeName(sys.name))) systemsByKey.set(normalizeName(sys.name), sys);
+  for (const sys of systems.values()) systemsByKey.set(normalizeName(sys.id), sys);
   const ions = new Map<string, StrongIon>();
   for (const e of view.ions.values()) ions.set(e.id, toIon(e.record));
   const atomicWeights = new Map([...view.atomicWeights].map(([el, e]) => [el, e.record.value]));
@@ -152,7 +156,7 @@ export function createLibrary(input: LibraryLayers): Library {
     get(id: string, kind: EntryKind = "substance"): MergedEntry | undefined {
       return kinds[kind].get(id);
     },
-    system: (id) => systems.get(id),
+    system: (idOrName) => systems.get(idOrName) ?? (typeof idOrName === "string" ? systemsByKey.get(normalizeName(idOrName)) : undefined),
     ion: (id) => ions.get(id),
     fingerprint(): string {
       fingerprintCache ??= computeFingerprint({
