@@ -4,12 +4,12 @@
  * once, in the constructor, and the inner loops allocate nothing.
  *
  * Charge balance (x = ln h, h = [H⁺] in mol/L, conditional constants at the current I):
- *   F(x) = h − K′w/h + Q + Σ_s C_s·(z0_s − D_s(h)) = 0,
- * Q = Σ z·c over strong ions, z0 the charge of the fully protonated form, D_s = Σ k·α_k the mean
- * number of protons the system has lost. dF/dx = h + K′w/h + Σ C_s·Var_s(k) > 0, so F is strictly
- * increasing in x and has exactly one root.
+ *   F(x) = h − K′w/h + Q + Σ_s C_s·Σ_k z_k·α_k(h) = 0,
+ * Q = Σ z·c over strong ions, z_k = z0 − k the charge of the species that has lost k protons, z0 the
+ * charge of the fully protonated form. dF/dx = h + K′w/h + Σ C_s·Var_s(z) > 0 (d α_k/dx =
+ * −α_k·(k − k̄)), so F is strictly increasing in x and has exactly one root.
  *
- * Bracket: 0 ≤ D_s ≤ n_s gives h − K′w/h + Pmin ≤ F ≤ h − K′w/h + Pmax with Pmax = Q + Σ C·z0 and
+ * Bracket: the mean charge lies between z0 − n and z0, which gives h − K′w/h + Pmin ≤ F ≤ h − K′w/h + Pmax with Pmax = Q + Σ C·z0 and
  * Pmin = Pmax − Σ C·n, so the root lies between the water-only roots for Pmax and Pmin. A Newton step
  * that leaves the bracket, or that does not halve |F|, is replaced by bisection: convergence is
  * guaranteed, and quadratic near the root.
@@ -55,8 +55,8 @@ export class ChargeBalanceSolver {
   readonly strongCharge: number;
   /** ½ Σ z²·c of the strong ions, mol/L. */
   readonly strongIonic: number;
-  /** Σ |z|·c of the strong ions plus Σ C·max|z| of the systems: the scale of the charge terms. */
-  readonly chargeScale: number;
+  /** Σ |z|·c of the strong ions. */
+  readonly strongAbs: number;
   readonly pMax: number;
   readonly pMin: number;
 
@@ -76,6 +76,8 @@ export class ChargeBalanceSolver {
   F = NaN;
   dF = NaN;
   ionicFromSpeciation = NaN;
+  /** Σ |z·c| over every charged term at the last evaluation: the scale of the charge balance. */
+  absCharge = NaN;
   /** Counters of the last solve. */
   evaluations = 0;
   outerIterations = 0;
@@ -102,7 +104,6 @@ export class ChargeBalanceSolver {
     this.kc = new Float64Array(steps);
     let pMax = strongCharge;
     let capacity = 0;
-    let scale = strongAbs;
     for (let s = 0; s < n; s++) {
       const sys = systems[s];
       const C = this.totals[s];
@@ -117,11 +118,10 @@ export class ChargeBalanceSolver {
       }
       pMax += C * z0;
       capacity += C * ns;
-      scale += C * Math.max(Math.abs(z0), Math.abs(z0 - ns));
     }
     this.strongCharge = strongCharge;
     this.strongIonic = strongIonic;
-    this.chargeScale = scale;
+    this.strongAbs = strongAbs;
     this.pMax = pMax;
     this.pMin = pMax - capacity;
   }
@@ -153,7 +153,11 @@ export class ChargeBalanceSolver {
     return -LN10 * this.debyeA * activityShapeDerivative(this.model, this.ionicStrength);
   }
 
-  /** Evaluates F, dF/dx and the ionic strength of the speciation at x = ln[H⁺]. */
+  /**
+   * Evaluates F, dF/dx, the ionic strength of the speciation and the sum of |charge terms| at
+   * x = ln[H⁺]. Each system's charge is summed as Σ z_k·α_k (not z0 − D), so a dominant neutral
+   * species contributes exactly 0 and the rounding error scales with the charged terms only.
+   */
   evaluate(x: number): void {
     const h = Math.exp(x);
     const invH = 1 / h;
@@ -161,6 +165,7 @@ export class ChargeBalanceSolver {
     let F = h - oh + this.strongCharge;
     let dF = h + oh;
     let zz = h + oh;
+    let abs = h + oh + this.strongAbs;
     const totals = this.totals;
     const kc = this.kc;
     for (let s = 0; s < this.nSys; s++) {
@@ -171,30 +176,36 @@ export class ChargeBalanceSolver {
       const z0 = this.topCharge[s];
       let t = 1;
       let s0 = 1;
-      let s1 = 0;
-      let s2 = 0;
+      let sz = z0;
+      let szz = z0 * z0;
+      let sa = z0 < 0 ? -z0 : z0;
       for (let k = 1; k <= n; k++) {
         t *= kc[o + k - 1] * invH;
+        const z = z0 - k;
         s0 += t;
-        s1 += k * t;
-        s2 += k * k * t;
+        sz += z * t;
+        szz += z * z * t;
+        sa += (z < 0 ? -z : z) * t;
         if (t > 1e200) {
           t *= 1e-200;
           s0 *= 1e-200;
-          s1 *= 1e-200;
-          s2 *= 1e-200;
+          sz *= 1e-200;
+          szz *= 1e-200;
+          sa *= 1e-200;
         }
       }
       const inv = 1 / s0;
-      const D = s1 * inv;
-      const m2 = s2 * inv;
-      const v = m2 - D * D;
-      F += C * (z0 - D);
+      const m = sz * inv;
+      const m2 = szz * inv;
+      const v = m2 - m * m;
+      F += C * m;
       dF += C * (v > 0 ? v : 0);
-      zz += C * (z0 * z0 - 2 * z0 * D + m2);
+      zz += C * m2;
+      abs += C * sa * inv;
     }
     this.F = F;
     this.dF = dF;
+    this.absCharge = abs;
     this.ionicFromSpeciation = this.strongIonic + 0.5 * zz;
     this.evaluations++;
   }
@@ -221,9 +232,7 @@ export class ChargeBalanceSolver {
       this.evaluate(x);
       const F = this.F;
       const absF = Math.abs(F);
-      const h = Math.exp(x);
-      const noise = 8 * EPS * (h + kwc / h + this.chargeScale);
-      if (absF <= noise) break;
+      if (absF <= 8 * EPS * this.absCharge) break;
       if (F < 0) xlo = x;
       else xhi = x;
       let xn = x - F / this.dF;
@@ -238,7 +247,7 @@ export class ChargeBalanceSolver {
       }
     }
     this.x = x;
-    return Math.abs(this.F) <= 8 * EPS * (Math.exp(x) + kwc / Math.exp(x) + this.chargeScale) || xhi - xlo <= tol;
+    return Math.abs(this.F) <= 8 * EPS * this.absCharge || xhi - xlo <= tol;
   }
 
   /**
