@@ -15,3 +15,7 @@ export { formatIssue } from "./validate/paths";
 export { computeFingerprint } from "./fingerprint";
 export { getActiveLibrary, setLayer, reportLayerProblem, getLayerProblems, onLibraryChange, resetActiveLibrary } from "./active";
 export type { UserLayer, LayerProblem, SetLayerResult } from "./active";
+export { parseLibraryText, exportLibraryText, importIntoLayer, mergeLibraryDocs, flattenLibrary, MAX_LIBRARY_BYTES } from "./io";
+export type { ParseResult, ImportResult, ImportCode } from "./io";
+export { pKbToPKa, PKW_25C } from "./pkb";
+export type { PkbResult } from "./pkb";
