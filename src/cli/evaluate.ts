@@ -15,7 +15,8 @@ export interface FormulaResult {
   message?: string;
 }
 
-const CONFIG = { licenseKey: "gpl-v3", maxRows: 200_000, maxColumns: 1_000 } as const;
+// smartRounding off: HyperFormula would otherwise round results to about 10 significant digits.
+const CONFIG = { licenseKey: "gpl-v3", maxRows: 200_000, maxColumns: 1_000, smartRounding: false } as const;
 
 function toResult(value: unknown): CellResult {
   if (value instanceof DetailedCellError) return { error: value.value, message: value.message ?? "" };

@@ -18,8 +18,8 @@ import {
 import "../functions/runtime-shim";
 import { CATALOGUE, type CatalogueEntry } from "../functions/catalogue";
 
-type Ast = { args: unknown[] };
-type State = unknown;
+type Ast = { args: any[] };
+type State = any;
 
 const ERROR_TYPES: Record<string, ErrorType> = {
   "#VALUE!": ErrorType.VALUE,
@@ -96,8 +96,8 @@ function buildPlugin(): typeof FunctionPlugin {
     const sizeMethod = `${method}_size`;
     const parameters = entry.params.map((p) => ({ argumentType: FunctionArgumentType.ANY, optionalArg: p.optional }));
 
-    proto[method] = function (this: AqPlugin & { runFunction: Function; metadata: Function; arraySizeForAst: Function }, ast: Ast, state: State) {
-      return this.runFunction(ast.args, state, this.metadata(name), (...values: unknown[]) => {
+    proto[method] = function (this: AqPlugin & { runFunction: Function; metadata: Function }, ast: Ast, state: State) {
+      return this.runFunction(ast.args, state, this.metadata(name), (...values: unknown[]): any => {
         try {
           const result = call(entry, values);
           if (entry.result === "scalar") return toHyperFormulaScalar(result);

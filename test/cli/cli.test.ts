@@ -1,0 +1,129 @@
+/**
+ * The headless contract: `protolyte eval` and `protolyte sheet` evaluate AQ formulas in the embedded
+ * spreadsheet engine as a user types them (ranges, inline arrays, spills, error values with messages).
+ */
+import { execFileSync, spawnSync } from "node:child_process";
+import { mkdtempSync, readFileSync, writeFileSync } from "node:fs";
+import { tmpdir } from "node:os";
+import { join } from "node:path";
+import { parseCsv } from "../../src/cli/csv";
+import { evaluateFormula, evaluateSheets } from "../../src/cli/evaluate";
+
+const root = join(__dirname, "..", "..");
+const tsx = join(root, "node_modules", ".bin", "tsx");
+const cli = join(root, "src", "cli", "main.ts");
+
+function run(args: string[]): { code: number | null; out: string; err: string } {
+  const r = spawnSync(tsx, [cli, ...args], { cwd: root, encoding: "utf8" });
+  return { code: r.status, out: r.stdout, err: r.stderr };
+}
+
+describe("evaluateFormula", () => {
+  test("potassium hydrogen phthalate 0.05 mol/L reads pH 4.005 ± 0.02", () => {
+    // Hamer, Pinching & Acree, J. Res. NBS 36, 47 (1946): 0.05 mol/kg KHP, pH(S) 4.005 at 25 °C.
+    // ±0.02: Davies activity against the Bates–Guggenheim convention, molarity ≈ molality at 0.05.
+    const r = evaluateFormula('=AQ.PH("potassium hydrogen phthalate", 0.05)');
+    expect(r.error).toBeUndefined();
+    expect(Math.abs((r.value as number) - 4.005)).toBeLessThanOrEqual(0.02);
+  });
+
+  test("inline arrays, unit text and the same value as numbers", () => {
+    const a = evaluateFormula('=AQ.PH({"KH2PO4";"Na2HPO4"},{"25 mM";"25 mM"})');
+    const b = evaluateFormula('=AQ.PH({"KH2PO4";"Na2HPO4"},{0.025;0.025})');
+    expect(a.value).toBe(b.value);
+    // DIN 19266 / Buck et al. 2002: 0.025/0.025 mol/kg phosphate, pH(S) 6.865 at 25 °C, ±0.02 as above.
+    expect(Math.abs((a.value as number) - 6.865)).toBeLessThanOrEqual(0.02);
+  });
+
+  test("a spilled species table keeps phosphate's mass balance", () => {
+    const r = evaluateFormula('=AQ.SPECIES({"KH2PO4";"Na2HPO4"},{0.025;0.025})');
+    const rows = r.value as (string | number)[][];
+    expect(rows[0]).toEqual(["species", "charge", "mol/L", "fraction"]);
+    const phosphate = rows.filter((row) => /PO4/.test(String(row[0])));
+    expect(phosphate).toHaveLength(4);
+    const total = phosphate.reduce((s, row) => s + (row[2] as number), 0);
+    expect(Math.abs(total - 0.05) / 0.05).toBeLessThan(1e-9);
+    const fractions = phosphate.reduce((s, row) => s + (row[3] as number), 0);
+    expect(Math.abs(fractions - 1)).toBeLessThan(1e-12);
+  });
+
+  test("an unknown substance is #VALUE! naming the closest known names", () => {
+    const r = evaluateFormula('=AQ.PH("sodium acetat", 0.1)');
+    expect(r.error).toBe("#VALUE!");
+    expect(r.message).toMatch(/Unknown substance 'sodium acetat'.*sodium acetate/);
+  });
+
+  test("mismatched ranges are #VALUE! saying both shapes", () => {
+    const r = evaluateFormula('=AQ.PH({"KH2PO4";"Na2HPO4"},{0.025})');
+    expect(r.error).toBe("#VALUE!");
+    expect(r.message).toMatch(/2×1.*1×1/);
+  });
+
+  test("a species that is not in the mixture is #N/A with the species it has", () => {
+    const r = evaluateFormula('=AQ.SPECIES("acetic acid", 0.1, "NH4+")');
+    expect(r.error).toBe("#N/A");
+    expect(r.message).toMatch(/not in this mixture/);
+  });
+});
+
+describe("evaluateSheets", () => {
+  test("formulas referring to cell ranges, with an error cell listed by address", () => {
+    const [sheet] = evaluateSheets({
+      Sheet1: [
+        ["substance", "mol/L"],
+        ["KH2PO4", 0.025],
+        ["Na2HPO4", 0.025],
+        ["pH", "=AQ.PH(A2:A3,B2:B3)"],
+        ["bad", "=AQ.PH(A2:A3,B2:B2)"],
+      ],
+    });
+    const ph = sheet!.values[3]![1] as number;
+    expect(Math.abs(ph - 6.865)).toBeLessThanOrEqual(0.02); // DIN 19266, as above
+    expect(sheet!.errors).toEqual([expect.objectContaining({ address: "B5", error: "#VALUE!" })]);
+  });
+});
+
+describe("protolyte command", () => {
+  test("eval prints a number; --json prints {value}; an error value exits 1 with {error, message}", () => {
+    const plain = run(["eval", '=AQ.PH("potassium hydrogen phthalate",0.05)']);
+    expect(plain.code).toBe(0);
+    expect(Number(plain.out.trim())).toBeCloseTo(Number(plain.out.trim()), 12);
+    expect(Math.abs(Number(plain.out.trim()) - 4.005)).toBeLessThanOrEqual(0.02); // Hamer et al. 1946
+    const json = run(["eval", "--json", '=AQ.PH("potassium hydrogen phthalate",0.05)']);
+    expect(JSON.parse(json.out)).toEqual({ value: Number(plain.out.trim()) });
+    const bad = run(["eval", "--json", '=AQ.PH("xyzzy",0.05)']);
+    expect(bad.code).toBe(1);
+    const parsed = JSON.parse(bad.out) as { error: string; message: string };
+    expect(parsed.error).toBe("#VALUE!");
+    expect(parsed.message).toMatch(/xyzzy/);
+  });
+
+  test("sheet evaluates a CSV and writes the values with --out", () => {
+    const dir = mkdtempSync(join(tmpdir(), "protolyte-"));
+    const input = join(dir, "in.csv");
+    const output = join(dir, "out.csv");
+    writeFileSync(input, 'name,amount\nTris,0.05\n"Tris HCl",0.05\npH,"=AQ.PH(A2:A3,B2:B3)"\n');
+    const r = run(["sheet", input, "--out", output]);
+    expect(r.code).toBe(0);
+    const rows = parseCsv(readFileSync(output, "utf8"));
+    const ph = Number(rows[3]![1]);
+    // Tris pK 8.072 at 25 °C (Goldberg et al. 2002): an equimolar Tris/Tris·HCl buffer reads near it,
+    // raised by the activity correction of the cation (≈ +0.08 at I = 0.05); the window allows for that.
+    expect(ph).toBeGreaterThan(8.05);
+    expect(ph).toBeLessThan(8.25);
+  });
+
+  test("usage problems exit 2 with the usage text", () => {
+    const r = run(["sheet"]);
+    expect(r.code).toBe(2);
+    expect(r.err).toMatch(/Usage:/);
+    const missing = run(["sheet", "/nonexistent/file.csv"]);
+    expect(missing.code).toBe(2);
+    expect(missing.err).toMatch(/cannot read/);
+  });
+});
+
+test("the CLI source file is executable through tsx without a build", () => {
+  const out = execFileSync(tsx, [cli, "--help"], { cwd: root, encoding: "utf8" });
+  expect(out).toMatch(/protolyte eval/);
+});
