@@ -43,8 +43,8 @@ export function pHOffset(mix: Mixture, target: number, opts: ChemOptions): Evalu
  * ion total above DEFAULTS.maxConcentration. 0 when the mixture is already at that limit.
  */
 export function maxAddable(mix: Mixture, titrant: Component): number {
-  const limit = DEFAULTS.maxConcentration;
-  let n = limit;
+  const limit: number = DEFAULTS.maxConcentration;
+  let n: number = limit;
   const sysTotal = new Map<string, number>();
   const ionTotal = new Map<string, number>();
   for (const e of mix) {

@@ -1,0 +1,122 @@
+/**
+ * adjust: the amount of a titrant (any component: NaOH, HCl, a buffer salt, a concentrated buffer)
+ * that brings a mixture to a target pH.
+ *
+ * Modes:
+ * - per litre (no stock given): n mol of titrant per litre of mixture, volume unchanged, so that
+ *   pH(mix + n titrant) = target. n is searched in [0, n_max], n_max the most the engine accepts.
+ * - stock (stock = { conc: c_s mol/L, volume: V L }): v litres of stock such that the batch diluted
+ *   to V + v, plus c_s·v/(V + v) of titrant, has the target pH. The search variable is the stock's
+ *   volume fraction f = v/(V + v) ∈ [0, 1]; f = 1 is the stock alone, the limit as v → ∞.
+ *
+ * Method: first crossing along the path (crossing.ts): a geometric grid in n (2 points per decade
+ * from 1e-12 mol/L) or in v/V (1e-12 … 1e8, then f = 1), the first sign change of pH − target is a
+ * guaranteed bracket, refined by Brent's method to |pH − target| ≤ 1e-11. A target that no grid
+ * point crosses is "unreachable", with a message saying which way the titrant moves the pH and how
+ * far it can take it (unreachable.ts). A target equal to the current pH gives 0.
+ */
+import { fail } from "../failure";
+import { prepare } from "../prepared";
+import type { ChemOptions, Component, Mixture, Result } from "../types";
+import { resolveOptions } from "../validate-options";
+import { firstCrossing, geometricGrid } from "./crossing";
+import { maxAddable, mixedWithStock, pHOffset, withAdded } from "./mixing";
+import { unreachable } from "./unreachable";
+import { checkPositive, checkTargetPH, checkTitrant } from "./validate";
+
+export interface AdjustStock {
+  /** Stock concentration of the titrant, mol/L. */
+  conc: number;
+  /** Batch volume before the addition, L. */
+  volume: number;
+}
+
+export interface AdjustOptions extends ChemOptions {
+  /** Given: the answer is litres of stock for the batch, dilution included. */
+  stock?: AdjustStock;
+}
+
+export interface AdjustValue {
+  mode: "per-litre" | "stock";
+  /** mol of titrant per litre of mixture ("per-litre"), or litres of stock for the batch ("stock"). */
+  value: number;
+  /** mol/L of titrant in the final solution. */
+  titrantConc: number;
+  /** pH before the addition and after it (the latter equals the target within 1e-11). */
+  startPH: number;
+  pH: number;
+  /** Ionic strength of the final solution, mol/L. */
+  ionicStrength: number;
+  /** The engine's warnings about the final solution. */
+  warnings: string[];
+}
+
+export type AdjustResult = Result<AdjustValue>;
+
+/** |pH − target| at which the refinement stops, pH units. */
+export const ADJUST_PH_TOLERANCE = 1e-11;
+
+/** Geometric grid of the per-litre search: first point and points per decade. */
+const FIRST_AMOUNT = 1e-12;
+const STOCK_RATIO_MIN = 1e-12;
+const STOCK_RATIO_MAX = 1e8;
+const PER_DECADE = 2;
+
+function finish(mode: AdjustValue["mode"], value: number, titrantConc: number, startPH: number, final: Mixture, opts: ChemOptions): AdjustResult {
+  const p = prepare(final);
+  if (!p.ok) return p;
+  const eq = p.solve(opts);
+  if (!eq.ok) return eq;
+  return { ok: true, mode, value, titrantConc, startPH, pH: eq.pH, ionicStrength: eq.ionicStrength, warnings: eq.warnings };
+}
+
+/** Amount of titrant to reach a target pH: mol/L without a stock, litres of stock with one. */
+export function adjust(mix: Mixture, titrant: Component, targetPH: number, opts: AdjustOptions = {}): AdjustResult {
+  const o = resolveOptions(opts);
+  if (!o.ok) return o;
+  const chem: ChemOptions = { temperatureC: o.temperatureC, activity: o.activity };
+  const bad = checkTitrant(titrant) ?? checkTargetPH(targetPH);
+  if (bad) return bad;
+  const prepared = prepare(mix);
+  if (!prepared.ok) return prepared;
+  return opts.stock === undefined ? adjustPerLitre(mix, titrant, targetPH, chem) : adjustWithStock(mix, titrant, targetPH, opts.stock, chem);
+}
+
+function adjustPerLitre(mix: Mixture, titrant: Component, target: number, chem: ChemOptions): AdjustResult {
+  const nMax = maxAddable(mix, titrant);
+  const grid = nMax > FIRST_AMOUNT ? geometricGrid(FIRST_AMOUNT, nMax, PER_DECADE) : [0];
+  const g = (n: number) => pHOffset(withAdded(mix, titrant, n), target, chem);
+  const r = firstCrossing(g, grid, ADJUST_PH_TOLERANCE);
+  if (!r.ok) return r;
+  if (!r.found) return unreachable({ titrant, target, samples: r.samples, mode: "per-litre", limit: nMax, stoppedBy: r.failure });
+  const start = g(0);
+  if (!start.ok) return start;
+  return finish("per-litre", r.t, r.t, start.value + target, withAdded(mix, titrant, r.t), chem);
+}
+
+function adjustWithStock(mix: Mixture, titrant: Component, target: number, stock: AdjustStock, chem: ChemOptions): AdjustResult {
+  const bad = checkPositive(stock?.conc, "stock concentration", "mol/L") ?? checkPositive(stock?.volume, "batch volume", "L");
+  if (bad) return bad;
+  const most = maxAddable([], titrant);
+  if (stock.conc > most) {
+    return fail("out-of-range", `A ${titrant.name} stock at ${stock.conc} mol/L is above the ${most.toPrecision(3)} mol/L the engine accepts.`);
+  }
+  const grid = geometricGrid(STOCK_RATIO_MIN, STOCK_RATIO_MAX, PER_DECADE).map((r) => r / (1 + r));
+  grid.push(1);
+  const g = (f: number) => pHOffset(mixedWithStock(mix, titrant, stock.conc, f), target, chem);
+  const r = firstCrossing(g, grid, ADJUST_PH_TOLERANCE);
+  if (!r.ok) return r;
+  if (!r.found || r.t >= 1) {
+    const samples = r.found ? [] : r.samples;
+    if (r.found) {
+      // The target is the stock's own pH: reached only in the limit of infinite stock volume.
+      return fail("unreachable", `The target is the pH of the ${titrant.name} stock itself: it is approached only as the stock volume grows without bound.`);
+    }
+    return unreachable({ titrant, target, samples, mode: "stock", limit: stock.conc, stoppedBy: r.failure });
+  }
+  const f = r.t;
+  const litres = (stock.volume * f) / (1 - f);
+  const start = g(0);
+  if (!start.ok) return start;
+  return finish("stock", litres, stock.conc * f, start.value + target, mixedWithStock(mix, titrant, stock.conc, f), chem);
+}

@@ -1,0 +1,5 @@
+/**
+ * Formulation workflows on top of the equilibrium engine: titrant to a target pH, buffer capacity,
+ * titration curves, the pH band over tolerances, and buffer recipes. Pure: no Office API, no DOM.
+ */
+export { adjust, ADJUST_PH_TOLERANCE, type AdjustOptions, type AdjustStock, type AdjustValue, type AdjustResult } from "./adjust";
