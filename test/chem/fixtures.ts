@@ -9,6 +9,7 @@
  * memory, unverified: used as data only, never as a test oracle).
  */
 import type { AcidBaseSystem, Component, Mixture, StrongIon } from "../../src/chem";
+export type { Component } from "../../src/chem";
 
 // ---- acid–base systems ------------------------------------------------------------------------
 
