@@ -56,12 +56,13 @@ function otherLayers(layer: UserLayer): LibraryDoc[] {
 
 /**
  * Replace a user layer (null empties it). The data is validated first, with references allowed
- * into the other layers; on failure nothing changes.
+ * into the other layers; on failure nothing changes. `ignoreReferences` (for stored layers) lets
+ * dangling references through: the merged library lists them and marks those entries unusable.
  */
-export function setLayer(layer: UserLayer, data: unknown): SetLayerResult {
+export function setLayer(layer: UserLayer, data: unknown, options: { ignoreReferences?: boolean } = {}): SetLayerResult {
   let doc: LibraryDoc | null = null;
   if (data !== null && data !== undefined) {
-    const v = validateLibraryDoc(data, otherLayers(layer));
+    const v = validateLibraryDoc(data, otherLayers(layer), options);
     if (!v.ok) return v;
     doc = v.doc;
   }

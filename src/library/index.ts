@@ -19,3 +19,4 @@ export { parseLibraryText, exportLibraryText, importIntoLayer, mergeLibraryDocs,
 export type { ParseResult, ImportResult, ImportCode } from "./io";
 export { pKbToPKa, PKW_25C } from "./pkb";
 export type { PkbResult } from "./pkb";
+export * from "./storage";

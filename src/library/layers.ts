@@ -92,7 +92,7 @@ export function createLibrary(input: LibraryLayers): Library {
   for (const e of view.systems.values()) {
     const issues: ValidationIssue[] = [];
     checkSystem(e.record, childPath("systems", e.index), world, issues);
-    issues.forEach((i) => problems.push({ ...i, layer: e.layer, severity: "error" }));
+    issues.forEach((i) => problems.push({ layer: e.layer, severity: "error", path: i.path, message: i.message }));
     systems.set(e.id, toSystem(e.record));
   }
   const systemsByKey = new Map<string, AcidBaseSystem>();
@@ -107,7 +107,7 @@ export function createLibrary(input: LibraryLayers): Library {
   for (const e of view.substances.values()) {
     const issues: ValidationIssue[] = [];
     checkSubstance(e.record, childPath("substances", e.index), world, issues);
-    issues.forEach((i) => problems.push({ ...i, layer: e.layer, severity: "error" }));
+    issues.forEach((i) => problems.push({ layer: e.layer, severity: "error", path: i.path, message: i.message }));
     const built = toComponent(e.record, systems, ions, atomicWeights);
     if (built.ok && issues.length === 0) components.set(e.id, built.component);
     else unusable.set(e.id, issues.map((i) => i.message).join("; ") || (built.ok ? "" : built.message));

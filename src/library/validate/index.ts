@@ -32,9 +32,15 @@ export function checkShape(value: unknown): ValidationIssue[] {
 
 /**
  * Validate an untrusted value as a library file. References (sources, systems, ions, elements) may
- * point into `context`, the layers it will sit on.
+ * point into `context`, the layers it will sit on. With `ignoreReferences`, dangling references are
+ * let through (stored layers: the merged library then reports them and marks those entries unusable,
+ * rather than the whole layer being dropped).
  */
-export function validateLibraryDoc(value: unknown, context: readonly LibraryDoc[] = []): ValidationResult {
+export function validateLibraryDoc(
+  value: unknown,
+  context: readonly LibraryDoc[] = [],
+  options: { ignoreReferences?: boolean } = {},
+): ValidationResult {
   const unsafe = findUnsafeKeys(value);
   if (unsafe.length) return failure("unsafe-key", "refused", unsafe);
   const top = typeof value === "object" && value !== null && !Array.isArray(value) ? (value as Record<string, unknown>) : null;
@@ -53,7 +59,9 @@ export function validateLibraryDoc(value: unknown, context: readonly LibraryDoc[
   const shape = checkShape(value);
   if (shape.length) return failure("invalid", "invalid library", shape);
   const doc = value as LibraryDoc;
-  const semantic = checkSemantics(doc, context);
+  const semantic = checkSemantics(doc, context)
+    .filter((i) => !(options.ignoreReferences && i.reference))
+    .map(({ path, message }) => ({ path, message }));
   if (semantic.length) return failure("invalid", "invalid library", semantic);
   return { ok: true, doc };
 }

@@ -8,6 +8,11 @@ import { normalizeName } from "../normalize";
 import type { IonRecord, LibraryDoc, SourceRecord, SubstanceRecord, SystemRecord, ValidationIssue, ValueRecord } from "../types";
 import { childPath } from "./paths";
 
+/** A semantic problem; `reference` marks a dangling reference (which may be mended by another layer). */
+export interface SemanticIssue extends ValidationIssue {
+  reference?: boolean;
+}
+
 /** Everything a reference may point at. */
 export interface World {
   sources: ReadonlyMap<string, SourceRecord>;
@@ -31,13 +36,13 @@ export function worldOf(docs: readonly LibraryDoc[]): World {
   return { sources, systems, ions, elements };
 }
 
-function checkValue(v: ValueRecord | undefined, path: string, world: World, out: ValidationIssue[]): void {
+function checkValue(v: ValueRecord | undefined, path: string, world: World, out: SemanticIssue[]): void {
   if (v?.source !== undefined && !world.sources.has(v.source)) {
-    out.push({ path: childPath(path, "source"), message: `unknown source '${v.source}' (add it to sources)` });
+    out.push({ path: childPath(path, "source"), message: `unknown source '${v.source}' (add it to sources)`, reference: true });
   }
 }
 
-export function checkSystem(s: SystemRecord, path: string, world: World, out: ValidationIssue[]): void {
+export function checkSystem(s: SystemRecord, path: string, world: World, out: SemanticIssue[]): void {
   if (s.speciesNames && s.speciesNames.length !== s.steps.length + 1) {
     out.push({ path: childPath(path, "speciesNames"), message: `has ${s.speciesNames.length} names; ${s.steps.length} steps need ${s.steps.length + 1}` });
   }
@@ -65,17 +70,17 @@ export function formulaCharge(s: SubstanceRecord, world: World): number | null {
   return z;
 }
 
-export function checkSubstance(s: SubstanceRecord, path: string, world: World, out: ValidationIssue[]): void {
+export function checkSubstance(s: SubstanceRecord, path: string, world: World, out: SemanticIssue[]): void {
   (s.systems ?? []).forEach((share, i) => {
     const p = childPath(childPath(path, "systems"), i);
     const sys = world.systems.get(share.system);
-    if (!sys) out.push({ path: childPath(p, "system"), message: `unknown acid–base system '${share.system}'` });
+    if (!sys) out.push({ path: childPath(p, "system"), message: `unknown acid–base system '${share.system}'`, reference: true });
     else if (share.protons > share.stoich * sys.steps.length + 1e-9) {
       out.push({ path: childPath(p, "protons"), message: `${share.protons} protons on ${share.stoich} × ${sys.id}, which has only ${sys.steps.length} dissociable per unit` });
     }
   });
   (s.ions ?? []).forEach((share, i) => {
-    if (!world.ions.has(share.ion)) out.push({ path: childPath(childPath(childPath(path, "ions"), i), "ion"), message: `unknown strong ion '${share.ion}'` });
+    if (!world.ions.has(share.ion)) out.push({ path: childPath(childPath(childPath(path, "ions"), i), "ion"), message: `unknown strong ion '${share.ion}'`, reference: true });
   });
   checkValue(s.molarMass, childPath(path, "molarMass"), world, out);
   if (s.formula !== undefined) {
@@ -83,7 +88,7 @@ export function checkSubstance(s: SubstanceRecord, path: string, world: World, o
     if (!parsed.ok) out.push({ path: childPath(path, "formula"), message: parsed.message });
     else {
       const missing = [...parsed.counts.keys()].filter((el) => !world.elements.has(el));
-      if (missing.length) out.push({ path: childPath(path, "formula"), message: `no atomic weight for ${missing.map((e) => `'${e}'`).join(", ")}` });
+      if (missing.length) out.push({ path: childPath(path, "formula"), message: `no atomic weight for ${missing.map((e) => `'${e}'`).join(", ")}`, reference: true });
     }
   }
   const releases = (s.systems?.length ?? 0) + (s.ions?.length ?? 0);
@@ -110,7 +115,7 @@ export function lookupNames(s: SubstanceRecord, path: string): { text: string; k
   return names.map((n) => ({ ...n, key: normalizeName(n.text) }));
 }
 
-function duplicateIds(items: { id: string }[] | undefined, section: string, out: ValidationIssue[]): void {
+function duplicateIds(items: { id: string }[] | undefined, section: string, out: SemanticIssue[]): void {
   const first = new Map<string, number>();
   (items ?? []).forEach((item, i) => {
     const seen = first.get(item.id);
@@ -120,8 +125,8 @@ function duplicateIds(items: { id: string }[] | undefined, section: string, out:
 }
 
 /** Semantic checks of one library file; references may also point into `context` (the layers below). */
-export function checkSemantics(doc: LibraryDoc, context: readonly LibraryDoc[] = []): ValidationIssue[] {
-  const out: ValidationIssue[] = [];
+export function checkSemantics(doc: LibraryDoc, context: readonly LibraryDoc[] = []): SemanticIssue[] {
+  const out: SemanticIssue[] = [];
   const world = worldOf([...context, doc]);
   duplicateIds(doc.systems, "systems", out);
   duplicateIds(doc.ions, "ions", out);
