@@ -3,3 +3,4 @@
  * titration curves, the pH band over tolerances, and buffer recipes. Pure: no Office API, no DOM.
  */
 export { adjust, ADJUST_PH_TOLERANCE, type AdjustOptions, type AdjustStock, type AdjustValue, type AdjustResult } from "./adjust";
+export { capacity, STRONG_BASE, STRONG_ACID, type CapacityValue, type CapacityResult } from "./capacity";
