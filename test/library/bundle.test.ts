@@ -1,0 +1,40 @@
+/**
+ * The library ships inside the custom-functions bundle (budget: 300 KB minified for all function
+ * code). Its share, data files included, must stay small and must never pull in ajv, which is a
+ * test-only dependency here. Bundled with esbuild (installed with tsx) as a quick stand-in for the
+ * production webpack build.
+ */
+import { buildSync } from "esbuild";
+import path from "node:path";
+
+const LIBRARY_BUDGET_BYTES = 120 * 1024;
+
+const bundle = (entry: string) =>
+  buildSync({
+    entryPoints: [path.join(__dirname, "../../src/library", entry)],
+    bundle: true,
+    minify: true,
+    write: false,
+    format: "esm",
+    platform: "browser",
+    target: "es2020",
+    metafile: true,
+    logLevel: "silent",
+  });
+
+test(`the whole library, data included, minifies under ${LIBRARY_BUDGET_BYTES / 1024} KB without ajv or Node modules`, () => {
+  const out = bundle("index.ts");
+  const bytes = out.outputFiles[0].contents.length;
+  const inputs = Object.keys(out.metafile.inputs);
+  expect(inputs.filter((f) => f.includes("node_modules"))).toEqual([]);
+  expect(bytes).toBeLessThan(LIBRARY_BUDGET_BYTES);
+  expect(bytes).toBeGreaterThan(40 * 1024); // the data files are in it
+});
+
+test("only the workbook-settings adapter mentions Excel or Office", () => {
+  const out = bundle("index.ts");
+  const offenders = Object.keys(out.metafile.inputs).filter((f) => !f.endsWith(".json") && !f.endsWith("workbook-settings.ts"));
+  const fs = jest.requireActual<typeof import("node:fs")>("node:fs");
+  const touching = offenders.filter((f) => /\b(Excel|Office)\s*[.?]/.test(fs.readFileSync(path.join(__dirname, "../..", f), "utf8")));
+  expect(touching).toEqual([]);
+});
