@@ -5,7 +5,7 @@
  * species including strong ions, H⁺ and OH⁻, residual, iterations, regime, warnings) or a Failure.
  * solvePH(mix, opts): the fast path, pH, p[H] and I only.
  *
- * Model and method: see solver-core.ts (charge balance, bracket, convergence), beta.ts (β),
+ * Model and method: see solver-core.ts (charge balance, bracket, convergence), ionic-strength-iteration.ts, beta.ts (β),
  * regime.ts (regimes) and README.md.
  */
 import { prepare } from "./prepared";

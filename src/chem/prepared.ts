@@ -9,6 +9,7 @@ import { buildEquilibrium } from "./equilibrium-report";
 import { fail, fmt } from "./failure";
 import { LN10 } from "./physical-constants";
 import { ChargeBalanceSolver } from "./solver-core";
+import { solveCoupled } from "./ionic-strength-iteration";
 import type { ChemOptions, Equilibrium, Failure, Mixture, PHResult } from "./types";
 import { resolveOptions } from "./validate-options";
 import { SOLVER } from "./defaults";
@@ -35,7 +36,7 @@ export class PreparedMixture {
     const o = resolveOptions(opts);
     if (!o.ok) return o;
     this.core.setTemperature(o.temperatureC);
-    if (!this.core.solve(o.activity)) {
+    if (!solveCoupled(this.core, o.activity)) {
       return fail(
         "no-convergence",
         `The ionic strength did not converge in ${SOLVER.maxIonicStrengthIterations} iterations (last I = ${fmt(this.core.ionicStrength)} mol/L); no result is given.`,

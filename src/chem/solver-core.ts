@@ -14,11 +14,7 @@
  * that leaves the bracket, or that does not halve |F|, is replaced by bisection: convergence is
  * guaranteed, and quadratic near the root.
  *
- * Ionic strength: G(I) = I computed from the speciation solved at the constants for I. G(I_strong)
- * ≥ I_strong (the strong ions alone), and G is bounded, so I = G(I) has a root in a bracket
- * [lo, hi] found on the way. The iteration is a fixed point with adaptive damping (Wegstein, i.e. a
- * secant step on G(I) − I), kept inside the bracket and replaced by bisection when it leaves it or
- * stalls. It stops when |G(I) − I| ≤ 1e-12·G(I).
+ * The ionic-strength iteration around it is in ionic-strength-iteration.ts.
  */
 import { activityShape, activityShapeDerivative } from "./activity/model";
 import { SOLVER } from "./defaults";
@@ -248,57 +244,5 @@ export class ChargeBalanceSolver {
     }
     this.x = x;
     return Math.abs(this.F) <= 8 * EPS * this.absCharge || xhi - xlo <= tol;
-  }
-
-  /**
-   * Solves charge balance and ionic strength together for the current temperature and `model`.
-   * Returns true on convergence; the state (x, ionicStrength, kc, kwc, lnGamma1) is then the solution.
-   */
-  solve(model: ActivityModel): boolean {
-    this.model = model;
-    this.evaluations = 0;
-    this.outerIterations = 0;
-    let I = this.strongIonic;
-    this.setIonicStrength(I);
-    if (!this.solveLnH(NaN)) return false;
-    this.outerIterations = 1;
-    if (model === "ideal") {
-      this.setIonicStrength(this.ionicFromSpeciation);
-      return true;
-    }
-    let lo = I;
-    let hi = Infinity;
-    let prevI = NaN;
-    let prevG = NaN;
-    let lastAbsG = Infinity;
-    let Gv = this.ionicFromSpeciation;
-    const rtol = SOLVER.ionicStrengthRelTolerance;
-    for (let it = 1; it < SOLVER.maxIonicStrengthIterations; it++) {
-      const g = Gv - I;
-      if (Math.abs(g) <= rtol * Gv) {
-        // Converged: the state is the solution for I; report I as the ionic strength.
-        return true;
-      }
-      if (g > 0) lo = I > lo ? I : lo;
-      else hi = I < hi ? I : hi;
-      let In = Gv;
-      if (prevI === prevI && I !== prevI) {
-        const slope = (g - prevG) / (I - prevI);
-        if (slope < 0) In = I - g / slope;
-      }
-      const stalled = Math.abs(g) > 0.5 * lastAbsG;
-      if (!(In > lo && In < hi) || (stalled && hi !== Infinity)) {
-        In = hi === Infinity ? Gv : 0.5 * (lo + hi);
-      }
-      lastAbsG = Math.abs(g);
-      prevI = I;
-      prevG = g;
-      I = In;
-      this.setIonicStrength(I);
-      if (!this.solveLnH(this.x)) return false;
-      this.outerIterations = it + 1;
-      Gv = this.ionicFromSpeciation;
-    }
-    return false;
   }
 }
