@@ -115,6 +115,7 @@ export interface Equilibrium {
   species: Species[];
   /** Charge-balance residual relative to the largest charge term. */
   residual: number;
+  /** Ionic-strength iterations of the solve (1 for the ideal model). */
   iterations: number;
   regime: Regime;
   /** Plain-language warnings (ionic strength beyond the activity model's range, missing ΔrH° …). */
