@@ -11,6 +11,7 @@ const fs = require("fs");
 const HtmlWebpackPlugin = require("html-webpack-plugin");
 const CopyWebpackPlugin = require("copy-webpack-plugin");
 const CustomFunctionsMetadataPlugin = require("custom-functions-metadata-plugin");
+const { HelpPagesPlugin } = require("./scripts/help-pages");
 
 const PORT = 3000;
 
@@ -31,9 +32,11 @@ module.exports = (_env, argv) => {
   const https = httpsOptions();
   return {
     devtool: production ? false : "source-map",
+    // The task pane depends on the functions bundle: both run in one shared runtime, and dependOn
+    // makes them share module instances (one active constants library, one copy of the engine).
     entry: {
       functions: "./src/functions/functions.ts",
-      taskpane: "./src/taskpane/taskpane.ts",
+      taskpane: { import: "./src/taskpane/taskpane.ts", dependOn: "functions" },
     },
     output: {
       path: path.resolve(__dirname, "dist"),
@@ -60,11 +63,11 @@ module.exports = (_env, argv) => {
         inject: "body",
         scriptLoading: "blocking",
       }),
+      new HelpPagesPlugin(),
       new CopyWebpackPlugin({
         patterns: [
           { from: "assets", to: "assets" },
           { from: "manifest.xml", to: "manifest.xml" },
-          { from: "docs/functions", to: "help", noErrorOnMissing: true },
         ],
       }),
     ],

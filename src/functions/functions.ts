@@ -9,6 +9,9 @@
  *
  * The same function objects are registered in HyperFormula for headless use (src/cli/hf-plugin.ts).
  */
+// First: outside Excel (a plain browser page) the CustomFunctions global is missing, and the
+// associate calls the metadata plugin appends to this file would throw without it.
+import "./runtime-shim";
 import { guard } from "./errors";
 import { beta } from "./aq/beta";
 import { constantsId } from "./aq/constants-id";
