@@ -20,3 +20,4 @@ export type { ParseResult, ImportResult, ImportCode } from "./io";
 export { pKbToPKa, PKW_25C } from "./pkb";
 export type { PkbResult } from "./pkb";
 export * from "./storage";
+export { describeProvenance, formatSource } from "./provenance";
