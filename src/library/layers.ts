@@ -110,7 +110,7 @@ export function createLibrary(input: LibraryLayers): Library {
     issues.forEach((i) => problems.push({ layer: e.layer, severity: "error", path: i.path, message: i.message }));
     const built = toComponent(e.record, systems, ions, atomicWeights);
     if (built.ok && issues.length === 0) components.set(e.id, built.component);
-    else unusable.set(e.id, issues.map((i) => i.message).join("; ") || (built.ok ? "" : built.message));
+    else unusable.set(e.id, issues.length > 0 ? issues.map((i) => i.message).join("; ") : built.ok ? "" : built.message);
   }
 
   const index = buildAliasIndex([...view.substances.values()].map((e) => ({ record: e.record, layer: e.layer, index: e.index })));
