@@ -1,10 +1,10 @@
-/** Jest configuration: ts-jest (transpile only; `npm run typecheck` checks types), one summary line at the end. */
+/** Jest configuration: ts-jest (isolatedModules in tsconfig: transpile per file; `npm run typecheck` checks types), one summary line at the end. */
 module.exports = {
   testEnvironment: "node",
   roots: ["<rootDir>/test"],
   testMatch: ["**/*.test.ts"],
   transform: {
-    "^.+\\.ts$": ["ts-jest", { isolatedModules: true, tsconfig: "tsconfig.json" }],
+    "^.+\\.ts$": ["ts-jest", { tsconfig: "tsconfig.json" }],
   },
   moduleFileExtensions: ["ts", "js", "json"],
   setupFiles: ["<rootDir>/test/support/custom-functions-stub.ts"],

@@ -18,8 +18,9 @@ export function toSystem(r: SystemRecord): AcidBaseSystem {
   return Object.freeze(sys);
 }
 
+/** Strong ions are named by formula ("Na+", "Cl-"), like the other species in a speciation table. */
 export function toIon(r: IonRecord): StrongIon {
-  return Object.freeze({ id: r.id, name: r.name, charge: r.charge });
+  return Object.freeze({ id: r.id, name: r.formula ?? r.name, charge: r.charge });
 }
 
 export type ComponentResult = { ok: true; component: Component } | { ok: false; code: "unusable"; message: string };

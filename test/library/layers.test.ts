@@ -107,7 +107,7 @@ describe("system lookup", () => {
   });
   test("unknown systems and ions are undefined", () => {
     expect(lib.system("nope")).toBeUndefined();
-    expect(lib.ion("na")).toEqual({ id: "na", name: "sodium", charge: 1 });
+    expect(lib.ion("na")).toEqual({ id: "na", name: "Na+", charge: 1 });
     expect(lib.ion("nh4")).toBeUndefined();
   });
 });
