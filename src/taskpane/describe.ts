@@ -1,0 +1,144 @@
+/**
+ * Words for what the browser shows: layers, statuses, citations, value lines. Pure functions,
+ * tested without a DOM; the views put the results into text nodes.
+ */
+import type { EntryKind, LayerName, MergedEntry, SourceRecord, SubstanceRecord, SystemRecord, IonRecord, ValueRecord } from "../library";
+import { STATUS_LABEL } from "./forms";
+
+export const LAYER_LABEL: Record<LayerName, string> = { builtin: "built-in", workbook: "workbook", personal: "personal" };
+
+export const KIND_LABEL: Record<EntryKind, string> = {
+  substance: "substance",
+  system: "acid–base system",
+  ion: "strong ion",
+  source: "source",
+  atomicWeight: "atomic weight",
+};
+
+/** "Goldberg, Kishore, Lennen (2002) Thermodynamic quantities … Journal …, 31, 231." */
+export function citation(source: SourceRecord | undefined, id: string): string {
+  if (!source) return `unknown source '${id}'`;
+  const parts: string[] = [];
+  const who = source.authors ? `${source.authors}${source.year ? ` (${source.year})` : ""}` : source.year ? `(${source.year})` : "";
+  if (who) parts.push(who);
+  parts.push(source.title);
+  const where = [source.container, source.edition, source.volume, source.pages].filter(Boolean).join(", ");
+  if (where) parts.push(where);
+  if (source.doi) parts.push(`doi:${source.doi}`);
+  else if (source.url) parts.push(source.url);
+  return `${parts.join(". ")}.`.replace(/\.\.$/, ".");
+}
+
+export interface ValueLine {
+  /** "pKa", "ΔrH°", … */
+  label: string;
+  /** "7.5 kJ/mol" (dimensionless values without unit text). */
+  amount: string;
+  conditions: string;
+  status: ValueRecord["status"];
+  statusText: string;
+  /** True for values a QA reviewer must not take as published. */
+  flagged: boolean;
+  /** Citation with locator, or the reason for common practice / unverified. */
+  provenance: string;
+  note?: string;
+}
+
+export function valueLine(label: string, v: ValueRecord, sources: (id: string) => SourceRecord | undefined): ValueLine {
+  const amount = v.unit === "1" ? String(v.value) : `${v.value} ${v.unit}`;
+  let provenance = "";
+  if (v.source) provenance = `${citation(sources(v.source), v.source)}${v.locator ? ` — ${v.locator}` : ""}`;
+  else if (v.status !== "published") provenance = STATUS_LABEL[v.status];
+  return {
+    label,
+    amount,
+    conditions: v.conditions,
+    status: v.status,
+    statusText: STATUS_LABEL[v.status],
+    flagged: v.status !== "published",
+    provenance,
+    note: v.note,
+  };
+}
+
+/** Every value of an entry, in reading order. */
+export function valuesOf(entry: MergedEntry, sources: (id: string) => SourceRecord | undefined): ValueLine[] {
+  switch (entry.kind) {
+    case "system": {
+      const r = entry.record as SystemRecord;
+      return r.steps.flatMap((s, i) => {
+        const n = r.steps.length > 1 ? ` (step ${i + 1})` : "";
+        return [
+          valueLine(`pKa${n}`, s.pKa, sources),
+          ...(s.dH ? [valueLine(`ΔrH°${n}`, s.dH, sources)] : []),
+          ...(s.dCp ? [valueLine(`ΔrCp°${n}`, s.dCp, sources)] : []),
+        ];
+      });
+    }
+    case "substance": {
+      const r = entry.record as SubstanceRecord;
+      return r.molarMass ? [valueLine("molar mass", r.molarMass, sources)] : [];
+    }
+    case "atomicWeight":
+      return [valueLine("atomic weight", entry.record as ValueRecord, sources)];
+    default:
+      return [];
+  }
+}
+
+/** Display name of any entry. */
+export function entryName(entry: MergedEntry): string {
+  switch (entry.kind) {
+    case "source":
+      return (entry.record as SourceRecord).title;
+    case "atomicWeight":
+      return entry.id;
+    default:
+      return (entry.record as SystemRecord | SubstanceRecord | IonRecord).name;
+  }
+}
+
+/** One short line under the name. */
+export function entrySummary(entry: MergedEntry): string {
+  switch (entry.kind) {
+    case "system": {
+      const r = entry.record as SystemRecord;
+      return `pKa ${r.steps.map((s) => s.pKa.value).join(", ")}; top charge ${r.topCharge > 0 ? "+" : ""}${r.topCharge}`;
+    }
+    case "substance": {
+      const r = entry.record as SubstanceRecord;
+      return [r.formula, r.nature.replace(/-/g, " "), r.state].filter(Boolean).join(" · ");
+    }
+    case "ion": {
+      const r = entry.record as IonRecord;
+      return `${r.formula ?? r.id}, charge ${r.charge > 0 ? "+" : ""}${r.charge}`;
+    }
+    case "source": {
+      const r = entry.record as SourceRecord;
+      return [r.authors, r.year].filter(Boolean).join(", ");
+    }
+    case "atomicWeight":
+      return `${(entry.record as ValueRecord).value} g/mol`;
+  }
+}
+
+/** "overrides the built-in entry", or "" */
+export function overrideText(entry: MergedEntry): string {
+  if (entry.overrides.length === 0) return "";
+  return `overrides the ${entry.overrides.map((l) => LAYER_LABEL[l]).join(" and ")} entry`;
+}
+
+/** Lower-cased text a search matches against. */
+export function searchText(entry: MergedEntry): string {
+  const parts = [entry.id, entryName(entry), entrySummary(entry)];
+  if (entry.kind === "substance") parts.push(...((entry.record as SubstanceRecord).aliases ?? []));
+  if (entry.kind === "system") parts.push(...((entry.record as SystemRecord).speciesNames ?? []));
+  if (entry.kind === "source") parts.push((entry.record as SourceRecord).container ?? "");
+  return parts.join(" \u0001 ").toLowerCase();
+}
+
+/** Entries whose text contains every word of the query (case-insensitive). */
+export function filterEntries(entries: readonly MergedEntry[], query: string, kind: EntryKind | "all", layer: LayerName | "all" = "all"): MergedEntry[] {
+  const words = query.toLowerCase().split(/\s+/).filter((w) => w !== "");
+  return entries.filter((e) => (kind === "all" || e.kind === kind) && (layer === "all" || e.layer === layer) && words.every((w) => searchText(e).includes(w)));
+}

@@ -1,0 +1,75 @@
+/**
+ * The "try it" calculation: names and amounts → pH, through the library in effect and the same
+ * engine the spreadsheet functions use (src/chem), so an entry added in the pane is seen at work.
+ */
+import { parseQuantity, solveEquilibrium, DEFAULTS } from "../chem";
+import type { ActivityModel, Mixture, Regime } from "../chem";
+import type { Library, LayerName } from "../library";
+
+export interface TryRow {
+  name: string;
+  /** mol/L, or text with a unit ("25 mM", "2.1 g/L"). */
+  amount: string;
+}
+
+export interface TryIssue {
+  /** Row index, or -1 for the temperature / the whole mixture. */
+  row: number;
+  field: "name" | "amount" | "temperature" | "mixture";
+  message: string;
+}
+
+export type TryResult =
+  | {
+      ok: true;
+      pH: number;
+      pcH: number;
+      ionicStrength: number;
+      regime: Regime;
+      temperatureC: number;
+      warnings: string[];
+      /** Which library entry each row used. */
+      used: { row: number; id: string; name: string; layer: LayerName; overrides: LayerName[] }[];
+    }
+  | { ok: false; issues: TryIssue[] };
+
+export const REGIME_TEXT: Record<Regime, string> = {
+  buffer: "buffered",
+  "excess-strong-acid": "excess strong acid: no longer a buffer",
+  "excess-strong-base": "excess strong base: no longer a buffer",
+  "no-buffer": "no buffering system",
+};
+
+export function tryMixture(library: Library, rows: readonly TryRow[], temperatureText: string, activity: ActivityModel = DEFAULTS.activity): TryResult {
+  const issues: TryIssue[] = [];
+  const mix: Mixture = [];
+  const used: Extract<TryResult, { ok: true }>["used"] = [];
+  let temperatureC: number = DEFAULTS.temperatureC;
+  if (temperatureText.trim() !== "") {
+    const t = parseQuantity(/^[-+]?[\d.]+$/.test(temperatureText.trim()) ? Number(temperatureText.trim()) : temperatureText, "temperature");
+    if (!t.ok) issues.push({ row: -1, field: "temperature", message: t.message });
+    else if (t.value < DEFAULTS.minTemperatureC || t.value > DEFAULTS.maxTemperatureC) {
+      issues.push({ row: -1, field: "temperature", message: `${t.value} °C is outside ${DEFAULTS.minTemperatureC}–${DEFAULTS.maxTemperatureC} °C` });
+    } else temperatureC = t.value;
+  }
+  rows.forEach((row, i) => {
+    if (row.name.trim() === "" && row.amount.trim() === "") return;
+    const found = library.resolve(row.name);
+    if (!found.ok) {
+      issues.push({ row: i, field: "name", message: found.message });
+      return;
+    }
+    const q = parseQuantity(row.amount, "concentration", { molarMass: found.component.molarMass });
+    if (!q.ok) {
+      issues.push({ row: i, field: "amount", message: q.message });
+      return;
+    }
+    mix.push({ component: found.component, conc: q.value });
+    used.push({ row: i, id: found.entry.id, name: found.entry.record.name, layer: found.entry.layer, overrides: found.entry.overrides });
+  });
+  if (issues.length) return { ok: false, issues };
+  if (mix.length === 0) return { ok: false, issues: [{ row: -1, field: "mixture", message: "enter at least one substance and its amount" }] };
+  const r = solveEquilibrium(mix, { temperatureC, activity });
+  if (!r.ok) return { ok: false, issues: [{ row: -1, field: "mixture", message: r.message }] };
+  return { ok: true, pH: r.pH, pcH: r.pcH, ionicStrength: r.ionicStrength, regime: r.regime, temperatureC, warnings: r.warnings, used };
+}
