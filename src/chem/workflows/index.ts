@@ -9,3 +9,4 @@ export { EQUIVALENCE_PROMINENCE, type EquivalencePoint } from "./equivalence";
 export { phRange, PHRANGE_MAX_EXHAUSTIVE, type PHRangeOptions, type PHRangeValue, type PHRangeResult } from "./ph-range";
 export type { Quantity as PHRangeQuantity } from "./ph-range-model";
 export type { BoxPoint as PHRangePoint } from "./ph-range-search";
+export { recipe, RECIPE_I_TOLERANCE, type RecipeRequest, type RecipeLine, type RecipeValue, type RecipeResult } from "./recipe";
