@@ -78,6 +78,8 @@ function convert(u: MathUnit, dim: QuantityDimension, text: string, molarMass: n
   return fail("bad-input", `"${text}" has unit ${unitOnly(u)}, which is not a ${dim}: use for example ${EXAMPLES[dim]}.`);
 }
 
+const DECIMAL = /^[+-]?(\d+\.?\d*|\.\d+)(e[+-]?\d+)?$/i;
+
 /** Concentrations, volumes and amounts cannot be negative; temperatures in °C can. */
 function nonNegative(value: number, dim: QuantityDimension, text: string): Result<{ value: number }> {
   if (dim !== "temperature" && value < 0) return fail("bad-input", `A ${dim} cannot be negative (${text}).`);
@@ -102,8 +104,12 @@ export function parseQuantity(
   if (typeof value !== "string") return fail("bad-input", `Expected a number or unit text for the ${dimension}.`);
   const text = value.trim();
   if (text === "") return fail("bad-input", `Empty text where a ${dimension} was expected.`);
-  const plain = Number(text);
-  if (Number.isFinite(plain)) return nonNegative(plain, dimension, text);
+  // Decimal text only: Number() would also read "0x10", "0b11", "0o17" (16, 3, 15).
+  if (DECIMAL.test(text)) {
+    const plain = Number(text);
+    if (!Number.isFinite(plain)) return fail("bad-input", `"${text}" is too large to be a ${dimension}.`);
+    return nonNegative(plain, dimension, text);
+  }
   const normalised = text.replace(/\s*(°|º|deg\s+)C\b/g, " degC").replace(/℃/g, " degC").replace(/µ/g, "u");
   let u: MathUnit;
   try {

@@ -26,9 +26,10 @@ export function cellsOf(value: Cell): { value: Cell; row: number; col: number }[
 
 export function shapeOf(value: Cell): [number, number] {
   if (!Array.isArray(value)) return [1, 1];
-  const rows = value.length;
-  const cols = rows === 0 ? 0 : Math.max(...value.map((r) => (Array.isArray(r) ? r.length : 1)));
-  return [rows, cols];
+  // A loop, not Math.max(...rows): a whole-column reference (1 048 576 rows) overflows the call stack.
+  let cols = 0;
+  for (const r of value) cols = Math.max(cols, Array.isArray(r) ? r.length : 1);
+  return [value.length, cols];
 }
 
 /** "item 3" for a flat list, "row 2, column 1" for a table — counted from 1 as a user counts. */
@@ -72,14 +73,22 @@ export function quantity(
   return parsed.value;
 }
 
+/**
+ * Decimal number text as a user types it ("7", "-0.5", ".5", "1e-3"). JavaScript's Number() also
+ * reads "0x10", "0b11" and "0o17" as 16, 3 and 15: a cell never means those.
+ */
+const DECIMAL = /^[+-]?(\d+\.?\d*|\.\d+)(e[+-]?\d+)?$/i;
+
 /** A plain number (no units), e.g. a pH or a count. */
 export function plainNumber(value: Cell, what: string, fallback?: number): number {
   if (isBlank(value)) {
     if (fallback !== undefined) return fallback;
     throw badInput(`${what} is missing`);
   }
-  const n = typeof value === "number" ? value : typeof value === "string" ? Number(value.trim()) : NaN;
-  if (!Number.isFinite(n)) throw badInput(`${what} must be a number, got ${describe(value)}`);
+  if (typeof value === "boolean") throw badInput(`${what} must be a number, not ${value ? "TRUE" : "FALSE"}`);
+  const trimmed = typeof value === "string" ? value.trim() : "";
+  const n = typeof value === "number" ? value : DECIMAL.test(trimmed) ? Number(trimmed) : NaN;
+  if (!Number.isFinite(n)) throw badInput(`${what} must be a finite number, got ${describe(value)}`);
   return n;
 }
 

@@ -2,7 +2,7 @@
  * AQ.PKA: apparent (concentration) pKa of one step at a temperature and ionic strength, with the
  * Davies model — the constant that, with [H⁺] as a concentration, gives the species ratio.
  */
-import { apparentPKa } from "../../chem";
+import { apparentPKa, DEFAULTS } from "../../chem";
 import { isBlank, plainNumber, quantity, temperature as readTemperature, text, type Cell } from "../args";
 import { badInput, finite, orThrow } from "../errors";
 import { resolveSystem } from "../substances";
@@ -18,5 +18,10 @@ export function pka(substance: Cell, step: Cell, temperature: Cell, ionicStrengt
   const t = readTemperature(temperature);
   const I = quantity(ionicStrength, "ionic strength", "concentration", { fallback: 0 });
   if (I < 0) throw badInput(`ionic strength must be ≥ 0 mol/L, got ${I}`);
+  // The activity models give meaningless (even astronomically large) corrections far beyond their
+  // range; above the engine's concentration limit no mixture it solves could have this ionic strength.
+  if (I > DEFAULTS.maxConcentration) {
+    throw badInput(`ionic strength ${I} mol/L is above ${DEFAULTS.maxConcentration} mol/L, far beyond the range of the activity models`);
+  }
   return finite(orThrow(apparentPKa(system, k - 1, t, I, "davies")).value, "pKa");
 }

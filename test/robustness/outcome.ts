@@ -1,0 +1,69 @@
+/**
+ * What a spreadsheet call may produce, and the check every robustness test applies to it: a finite
+ * number, a string or boolean, a well-formed matrix of those, or a CustomFunctions.Error with code
+ * #VALUE! or #N/A and a one-line message of 1–250 characters. Anything else is a defect.
+ */
+export type Outcome =
+  | { kind: "value"; value: unknown }
+  | { kind: "error"; code: string; message: string }
+  | { kind: "escaped"; error: unknown };
+
+/** Calls `fn(...args)`, classifying what comes out; never throws. */
+export function outcomeOf(fn: (...a: any[]) => unknown, args: unknown[]): Outcome {
+  try {
+    return { kind: "value", value: fn(...args) };
+  } catch (error) {
+    if (error instanceof CustomFunctions.Error) return { kind: "error", code: error.code, message: error.message };
+    return { kind: "escaped", error };
+  }
+}
+
+function scalarProblem(v: unknown): string | null {
+  if (typeof v === "number") return Number.isFinite(v) ? null : `non-finite number ${String(v)}`;
+  if (typeof v === "string" || typeof v === "boolean") return null;
+  return `a cell of type ${v === null ? "null" : typeof v}`;
+}
+
+/** Why a returned value is not a proper cell value (null when it is fine). */
+export function valueProblem(value: unknown, result: "scalar" | "matrix"): string | null {
+  if (result === "scalar") return Array.isArray(value) ? "a scalar function returned an array" : scalarProblem(value);
+  if (!Array.isArray(value) || value.length === 0) return "a table function returned no rows";
+  if (!value.every(Array.isArray)) return "a table function returned a row that is not an array";
+  const width = (value[0] as unknown[]).length;
+  if (width === 0) return "a table function returned an empty row";
+  for (const row of value as unknown[][]) {
+    if (row.length !== width) return `a ragged table (row widths ${width} and ${row.length})`;
+    for (const cell of row) {
+      const p = scalarProblem(cell);
+      if (p) return p;
+    }
+  }
+  return null;
+}
+
+export const ALLOWED_CODES = ["#VALUE!", "#N/A"];
+
+/** Why an outcome breaks the contract (null when it keeps it). */
+export function outcomeProblem(o: Outcome, result: "scalar" | "matrix"): string | null {
+  if (o.kind === "escaped") {
+    const e = o.error as { constructor?: { name?: string }; message?: unknown };
+    return `an exception other than CustomFunctions.Error escaped: ${e?.constructor?.name ?? typeof e}: ${String(e?.message ?? e)}`;
+  }
+  if (o.kind === "value") return valueProblem(o.value, result);
+  if (!ALLOWED_CODES.includes(o.code)) return `error code ${o.code} (only #VALUE! and #N/A show a message)`;
+  if (typeof o.message !== "string" || o.message.trim() === "") return "an error without a message";
+  if (/[\r\n]/.test(o.message)) return "a message on more than one line";
+  if (o.message.length > 250) return `a message of ${o.message.length} characters (at most 250)`;
+  return null;
+}
+
+/** Short printable form of arguments for a failure report. */
+export function show(args: unknown): string {
+  let s: string;
+  try {
+    s = JSON.stringify(args, (_k, v) => (typeof v === "number" && !Number.isFinite(v) ? String(v) : v === undefined ? "<undefined>" : v));
+  } catch {
+    s = String(args);
+  }
+  return s.length > 400 ? `${s.slice(0, 400)}… (${s.length} chars)` : s;
+}

@@ -1,0 +1,65 @@
+/**
+ * Defects found by the robustness campaign, each pinned by the smallest case that showed it.
+ */
+import { parseQuantity } from "../../src/chem";
+import * as AQ from "../../src/functions/functions";
+import { resetActiveLibrary } from "../../src/library";
+import { outcomeOf, outcomeProblem } from "./outcome";
+
+beforeEach(() => resetActiveLibrary());
+
+describe("number text is decimal only", () => {
+  // Number("0x10") is 16 in JavaScript: "0x10" in an amount cell silently meant 16 mol/L.
+  test.each(["0x10", "0b11", "0o17", "0X1f"])("amount %p is refused, not read as a hexadecimal/binary/octal number", (text) => {
+    const o = outcomeOf(AQ.PH, [[["NaCl"]], [[text]]]);
+    expect(o).toMatchObject({ kind: "error", code: "#VALUE!" });
+    expect(parseQuantity(text, "concentration")).toMatchObject({ ok: false, code: "bad-input" });
+  });
+
+  test("a step given as '0x2' is refused; '2' and ' 2 ' are read", () => {
+    expect(outcomeOf(AQ.PKA, ["phosphate", "0x2"])).toMatchObject({ kind: "error", code: "#VALUE!", message: expect.stringMatching(/step must be a finite number/) });
+    const two = AQ.PKA("phosphate", 2);
+    expect(AQ.PKA("phosphate", "2" as never)).toBe(two);
+    expect(AQ.PKA("phosphate", " 2 " as never)).toBe(two);
+  });
+
+  test("decimal forms users type still work: '.5', '5.', '+5', '1e-3', ' 0.1 '", () => {
+    for (const [text, value] of [[".5", 0.5], ["5.", 5], ["+5", 5], ["1e-3", 0.001], [" 0.1 ", 0.1]] as const) {
+      expect({ text, r: parseQuantity(text, "concentration") }).toEqual({ text, r: { ok: true, value } });
+    }
+  });
+
+  test("'1e999' says it is too large (it used to say 'has unit , which is not a concentration')", () => {
+    expect(parseQuantity("1e999", "concentration")).toEqual({ ok: false, code: "bad-input", message: '"1e999" is too large to be a concentration.' });
+    const o = outcomeOf(AQ.PH, [[["NaCl"]], [["1e999"]]]);
+    expect(o).toMatchObject({ kind: "error", code: "#VALUE!", message: expect.stringMatching(/too large/) });
+  });
+});
+
+test("a whole-column reference (1 048 576 rows, one filled) gives the same pH as the single cell", () => {
+  // shapeOf used Math.max(...rows), which overflows the call stack for a whole column:
+  // the cell showed "#VALUE! internal error: Maximum call stack size exceeded".
+  const rows = 1_048_576;
+  const names: unknown[][] = Array.from({ length: rows }, () => [""]);
+  const amounts: unknown[][] = Array.from({ length: rows }, () => [""]);
+  names[0] = ["acetic acid"];
+  amounts[0] = [0.1];
+  names[rows - 1] = ["sodium acetate"];
+  amounts[rows - 1] = [0.1];
+  const o = outcomeOf(AQ.PH, [names, amounts]);
+  expect(outcomeProblem(o, "scalar")).toBeNull();
+  expect(o).toEqual({ kind: "value", value: AQ.PH([["acetic acid"], ["sodium acetate"]], [[0.1], [0.1]]) });
+});
+
+describe("AQ.PKA refuses an ionic strength no solution has", () => {
+  // It returned 6.1e299 for I = 1e300 and 66.6 for I = 100: numbers nobody should trust.
+  test.each([21, 100, 1e300])("I = %p mol/L → #VALUE!", (I) => {
+    const o = outcomeOf(AQ.PKA, ["phosphate", 2, 25, I]);
+    expect(o).toMatchObject({ kind: "error", code: "#VALUE!", message: expect.stringMatching(/above 20 mol\/L/) });
+  });
+
+  test("I = 20 mol/L and below still give a number", () => {
+    expect(Number.isFinite(AQ.PKA("phosphate", 2, 25, 20))).toBe(true);
+    expect(AQ.PKA("phosphate", 2, 25, 0)).toBeCloseTo(7.198, 3);
+  });
+});
