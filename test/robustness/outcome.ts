@@ -13,7 +13,7 @@ export function outcomeOf(fn: (...a: any[]) => unknown, args: unknown[]): Outcom
   try {
     return { kind: "value", value: fn(...args) };
   } catch (error) {
-    if (error instanceof CustomFunctions.Error) return { kind: "error", code: error.code, message: error.message };
+    if (error instanceof CustomFunctions.Error) return { kind: "error", code: error.code, message: error.message ?? "" };
     return { kind: "escaped", error };
   }
 }
