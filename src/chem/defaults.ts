@@ -32,6 +32,8 @@ export const SOLVER = {
 export const LIMITS = {
   /** mol/L: above this the activity models lose accuracy (Davies 1962; REFERENCES §2 gives 0.3–0.5). */
   ionicStrengthCaution: 0.3,
+  /** mol/L: extended Debye–Hückel (one ion-size parameter for every ion) is meant for I ≤ 0.1 (README, Validity limits). */
+  debyeHuckelCaution: 0.1,
   /** mol/L: above this the activity models are unreliable. */
   ionicStrengthStrong: 0.5,
   /** K: a pKa without ΔrH° is held at its 25 °C value; warn when |T − 25 °C| exceeds this. */

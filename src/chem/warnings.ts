@@ -8,8 +8,9 @@ export function ionicStrengthWarning(I: number, model: ActivityModel): string | 
   if (I > LIMITS.ionicStrengthStrong) {
     return `Ionic strength ${fmt(I)} mol/L is above ${LIMITS.ionicStrengthStrong} mol/L: the ${model} activity model is unreliable here, treat the pH as a rough estimate.`;
   }
-  if (I > LIMITS.ionicStrengthCaution) {
-    return `Ionic strength ${fmt(I)} mol/L is above ${LIMITS.ionicStrengthCaution} mol/L: the ${model} activity model loses accuracy here.`;
+  const caution = model === "debye-huckel" ? LIMITS.debyeHuckelCaution : LIMITS.ionicStrengthCaution;
+  if (I > caution) {
+    return `Ionic strength ${fmt(I)} mol/L is above ${caution} mol/L: the ${model} activity model loses accuracy here.`;
   }
   return null;
 }
