@@ -10,6 +10,8 @@
  */
 import {
   exportLibraryText,
+  loadLayer,
+  makeBlob,
   flattenLibrary,
   getActiveLibrary,
   getLayerProblems,
@@ -17,7 +19,6 @@ import {
   MAX_LIBRARY_BYTES,
   mergeLibraryDocs,
   parseLibraryText,
-  reportLayerProblem,
   SCHEMA_VERSION,
   setLayer,
   validateLibraryDoc,
@@ -27,13 +28,13 @@ import type { HostInfo } from "./host";
 import { describeImport, type ImportChange, type ImportMode } from "./import-preview";
 import { buildSource, buildSubstance, buildSystem, makeId, sourceToInput, substanceToInput, systemToInput } from "./forms";
 import type { Built, FieldIssue, SourceInput, SubstanceInput, SystemInput } from "./forms";
-import type { LayerStore } from "./storage";
+import type { PaneStores } from "./storage";
 import { tryMixture, type TryResult, type TryRow } from "./tryit";
 
 /** A stored layer that could not be read: kept as it was until the user resets it. */
 export interface StoredProblem {
   layer: UserLayer;
-  code: "corrupt" | "newer-version" | "invalid" | "unreadable";
+  code: "corrupt" | "newer-version" | "unavailable" | "read-failed";
   message: string;
   /** The stored text exactly as found (null when even reading failed). */
   raw: string | null;
@@ -93,7 +94,7 @@ export class PaneController {
 
   constructor(
     readonly host: HostInfo,
-    readonly stores: Readonly<Record<UserLayer, LayerStore>>,
+    readonly stores: PaneStores,
     /** False when browser storage is unavailable and layers live in memory only. */
     readonly persistent = true,
   ) {
@@ -121,36 +122,19 @@ export class PaneController {
   init(): Promise<void> {
     return this.serial(async () => {
       for (const layer of ["workbook", "personal"] as const) {
-        let raw: string | null;
-        try {
-          raw = await this.stores[layer].load();
-        } catch (e) {
-          this.setProblem({ layer, code: "unreadable", message: `the ${this.stores[layer].where} library could not be read: ${e instanceof Error ? e.message : String(e)}`, raw: null });
-          continue;
-        }
-        if (raw === null || raw.trim() === "") continue;
-        const parsed = parseLibraryText(raw, this.contextFor(layer));
-        if (!parsed.ok) {
-          const code = parsed.code === "not-json" ? "corrupt" : parsed.code === "newer-version" ? "newer-version" : "invalid";
-          const lead = {
-            corrupt: "is damaged (not readable as a library file)",
-            "newer-version": "was saved by a newer version of Protolyte",
-            invalid: "does not pass validation",
-            unreadable: "could not be read",
-          }[code];
-          this.setProblem({ layer, code, message: `The stored ${this.stores[layer].where} library ${lead}: ${parsed.message}. It is not in use; the layers below apply.`, raw });
-          continue;
-        }
-        const r = setLayer(layer, parsed.library);
-        if (!r.ok) this.setProblem({ layer, code: "invalid", message: `The stored ${this.stores[layer].where} library does not pass validation: ${r.message}`, raw });
+        const where = this.stores[layer].where;
+        const r = await loadLayer(layer, this.stores[layer].storage);
+        if (r.ok) continue;
+        const lead = {
+          corrupt: "is damaged or not a Protolyte library",
+          "newer-version": "was saved by a newer version of Protolyte",
+          unavailable: "cannot be reached",
+          "read-failed": "could not be read",
+        }[r.code];
+        this.problems.set(layer, { layer, code: r.code, message: `The stored ${where} library ${lead}: ${r.message}. It is not in use; the layers below it apply.`, raw: r.raw });
       }
       this.changed();
     });
-  }
-
-  private setProblem(p: StoredProblem): void {
-    this.problems.set(p.layer, p);
-    reportLayerProblem({ layer: p.layer, code: p.code, message: p.message });
   }
 
   /**
@@ -180,17 +164,28 @@ export class PaneController {
     const v = validateLibraryDoc(doc, this.contextFor(layer));
     if (!v.ok) return this.invalid(v.errors, entryPath, layer);
     const before = new Set(this.library.problems.map((p) => `${p.layer}:${p.path}:${p.message}`));
-    try {
-      await this.stores[layer].save(isEmpty(doc) ? null : JSON.stringify(doc));
-    } catch (e) {
-      return { ok: false, message: `Nothing was changed: ${e instanceof Error ? e.message : String(e)}`, issues: [], other: [] };
+    const store = this.stores[layer];
+    const storageWarnings: string[] = [];
+    if (isEmpty(doc)) {
+      try {
+        await store.storage.clear();
+      } catch (e) {
+        return { ok: false, message: `Nothing was changed: ${e instanceof Error ? e.message : String(e)}`, issues: [], other: [] };
+      }
+    } else {
+      const saved = await store.storage.save(makeBlob(doc));
+      if (!saved.ok) return { ok: false, message: `Nothing was changed: ${saved.message}`, issues: [], other: [] };
+      storageWarnings.push(...saved.warnings);
     }
     const applied = setLayer(layer, isEmpty(doc) ? null : doc);
     if (!applied.ok) return this.invalid(applied.errors, entryPath, layer);
     this.changed();
-    const warnings = this.library.problems.filter((p) => !before.has(`${p.layer}:${p.path}:${p.message}`)).map((p) => `${p.layer} library, ${p.path}: ${p.message}`);
-    const recalc = this.stores[layer] as LayerStore & { lastRecalcError?: string | null };
-    if (recalc.lastRecalcError) warnings.push(`Saved, but Excel could not recalculate the workbook (${recalc.lastRecalcError}). Press Ctrl+Alt+F9 to recalculate all formulas.`);
+    const warnings = [
+      ...storageWarnings,
+      ...this.library.problems.filter((p) => !before.has(`${p.layer}:${p.path}:${p.message}`)).map((p) => `${p.layer} library, ${p.path}: ${p.message}`),
+    ];
+    const after = store.afterChange ? await store.afterChange() : null;
+    if (after) warnings.push(after);
     return { ok: true, message: done, warnings, notes };
   }
 
@@ -383,15 +378,17 @@ export class PaneController {
   /** Discard an unreadable stored layer (only when the user says so). */
   resetLayer(layer: UserLayer): Promise<ActionResult> {
     return this.serial(async () => {
+      const store = this.stores[layer];
       try {
-        await this.stores[layer].save(null);
+        await store.storage.clear();
       } catch (e) {
         return { ok: false, message: `Not reset: ${e instanceof Error ? e.message : String(e)}`, issues: [], other: [] };
       }
       this.problems.delete(layer);
       setLayer(layer, null);
       this.changed();
-      return { ok: true, message: `The stored ${this.stores[layer].where} library was reset to empty.`, warnings: [], notes: [] };
+      const after = store.afterChange ? await store.afterChange() : null;
+      return { ok: true, message: `The stored ${store.where} library was reset to empty.`, warnings: after ? [after] : [], notes: [] };
     });
   }
 

@@ -1,93 +1,62 @@
 /**
- * Where each user layer is kept. The pane stores the layer as the text of a library file
- * (our own format, which carries its schemaVersion), so what is stored can always be exported
- * as it is, even when it can no longer be read.
+ * Where each user layer is kept, for the pane: the library's storage adapters (versioned blobs,
+ * typed problems for damaged or newer data) plus a label people can read.
  *
  * Browser: the personal layer in localStorage; outside Excel the "workbook" layer is simulated in
- * localStorage under its own key and labelled "browser page (no workbook)".
+ * localStorage under its own key and labelled "browser page (no workbook)". When localStorage is
+ * refused, both live in memory for the session and the pane says so.
  * Excel: see excel-store.ts (workbook settings, then a full recalculation).
  */
-import type { UserLayer } from "../library";
+import { createLocalStorageStorage, createMemoryStorage, PERSONAL_LIBRARY_KEY } from "../library";
+import type { LibraryStorage, UserLayer, WebStorageLike } from "../library";
 
-export interface LayerStore {
-  readonly layer: UserLayer;
+export interface PaneStore {
   /** Where the layer is kept, for people: "this workbook", "browser page (no workbook)". */
   readonly where: string;
-  /** The stored text, or null when nothing is stored. */
-  load(): Promise<string | null>;
-  /** Store the text (null removes it). Rejects with a message a person can act on. */
-  save(text: string | null): Promise<void>;
+  readonly storage: LibraryStorage;
+  /** Run after the stored layer changed (Excel: recalculate); returns a warning, or null. */
+  afterChange?(): Promise<string | null>;
 }
 
-export const STORAGE_KEYS = {
-  personal: "protolyte.library.personal",
-  /** Only outside Excel: stands in for the workbook settings. */
-  workbookSimulated: "protolyte.library.workbook-simulated",
-} as const;
+export type PaneStores = Readonly<Record<UserLayer, PaneStore>>;
 
-export interface KeyValueStorage {
-  getItem(key: string): string | null;
-  setItem(key: string, value: string): void;
-  removeItem(key: string): void;
-}
-
-/** A store on localStorage (or anything with the same three methods). */
-export class KeyValueLayerStore implements LayerStore {
-  constructor(
-    readonly layer: UserLayer,
-    readonly where: string,
-    private readonly storage: KeyValueStorage,
-    private readonly key: string,
-  ) {}
-
-  async load(): Promise<string | null> {
-    return this.storage.getItem(this.key);
-  }
-
-  async save(text: string | null): Promise<void> {
-    try {
-      if (text === null) this.storage.removeItem(this.key);
-      else this.storage.setItem(this.key, text);
-    } catch (e) {
-      const why = e instanceof Error ? e.message : String(e);
-      throw new Error(`the ${this.where} library could not be stored (${why}); browser storage may be full or disabled`);
-    }
-  }
-}
-
-/** In memory only: when the browser refuses localStorage (private modes, policies). */
-export class MemoryStorage implements KeyValueStorage {
-  private readonly map = new Map<string, string>();
-  getItem(key: string): string | null {
-    return this.map.has(key) ? (this.map.get(key) as string) : null;
-  }
-  setItem(key: string, value: string): void {
-    this.map.set(key, value);
-  }
-  removeItem(key: string): void {
-    this.map.delete(key);
-  }
-}
-
-/** window.localStorage if it works, else memory (with `persistent: false` so the pane can say so). */
-export function browserStorage(g: { localStorage?: KeyValueStorage } = globalThis as { localStorage?: KeyValueStorage }): { storage: KeyValueStorage; persistent: boolean } {
-  try {
-    const ls = g.localStorage;
-    if (ls) {
-      const probe = "protolyte.probe";
-      ls.setItem(probe, "1");
-      ls.removeItem(probe);
-      return { storage: ls, persistent: true };
-    }
-  } catch {
-    // fall through to memory
-  }
-  return { storage: new MemoryStorage(), persistent: false };
-}
+/** Only outside Excel: stands in for the workbook settings. */
+export const BROWSER_WORKBOOK_KEY = "protolyte.workbook-library.browser-page";
+export { PERSONAL_LIBRARY_KEY };
 
 export const WHERE = {
   workbook: "this workbook",
   workbookSimulated: "browser page (no workbook)",
-  personal: "personal (this browser)",
-  personalExcel: "personal (this computer)",
+  personal: "personal, this browser",
+  personalExcel: "personal, this computer",
+  memory: "this session only",
 } as const;
+
+/** window.localStorage if it can be written, else null. */
+export function usableLocalStorage(g: { localStorage?: WebStorageLike } = globalThis as { localStorage?: WebStorageLike }): WebStorageLike | null {
+  try {
+    const ls = g.localStorage;
+    if (!ls) return null;
+    const probe = "protolyte.probe";
+    ls.setItem(probe, "1");
+    ls.removeItem(probe);
+    return ls;
+  } catch {
+    return null;
+  }
+}
+
+export function personalStore(ls: WebStorageLike | null, inExcel: boolean): PaneStore {
+  if (!ls) return { where: `personal, ${WHERE.memory}`, storage: createMemoryStorage() };
+  return { where: inExcel ? WHERE.personalExcel : WHERE.personal, storage: createLocalStorageStorage({ storage: ls }) };
+}
+
+/** Both layers for a plain browser page. */
+export function browserStores(ls: WebStorageLike | null): PaneStores {
+  return {
+    workbook: ls
+      ? { where: WHERE.workbookSimulated, storage: createLocalStorageStorage({ storage: ls, key: BROWSER_WORKBOOK_KEY }) }
+      : { where: `${WHERE.workbookSimulated}, ${WHERE.memory}`, storage: createMemoryStorage() },
+    personal: personalStore(ls, false),
+  };
+}

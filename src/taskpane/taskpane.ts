@@ -3,21 +3,31 @@
  * or outside Office), picks the storage for the workbook and personal layers accordingly, loads
  * them, and starts the views.
  */
-import { PaneController } from "./controller";
-import { WorkbookSettingsStore, type ExcelApi } from "./excel-store";
-import { detectHost } from "./host";
-import { browserStorage, KeyValueLayerStore, STORAGE_KEYS, WHERE } from "./storage";
+import { findExcelRun } from "../library";
 import { startApp } from "./app";
+import { PaneController } from "./controller";
+import { workbookStore, type ExcelApi } from "./excel-store";
+import { detectHost, type HostInfo } from "./host";
+import { browserStores, personalStore, usableLocalStorage, type PaneStores } from "./storage";
+
+function storesFor(host: HostInfo): { host: HostInfo; stores: PaneStores } {
+  const ls = usableLocalStorage();
+  if (host.kind === "excel") {
+    const excel = (globalThis as unknown as { Excel: ExcelApi }).Excel;
+    const run = findExcelRun();
+    const workbook = run ? workbookStore(excel, run) : null;
+    if (workbook) return { host, stores: { workbook, personal: personalStore(ls, true) } };
+    return {
+      host: { kind: "browser", reason: "other-host", detail: "this Excel has no workbook settings (ExcelApi 1.4): the workbook library is kept in browser storage instead" },
+      stores: browserStores(ls),
+    };
+  }
+  return { host, stores: browserStores(ls) };
+}
 
 async function boot(): Promise<void> {
-  const host = await detectHost();
-  const { storage, persistent } = browserStorage();
-  const personal = new KeyValueLayerStore("personal", host.kind === "excel" ? WHERE.personalExcel : WHERE.personal, storage, STORAGE_KEYS.personal);
-  const workbook =
-    host.kind === "excel"
-      ? new WorkbookSettingsStore((globalThis as unknown as { Excel: ExcelApi }).Excel)
-      : new KeyValueLayerStore("workbook", WHERE.workbookSimulated, storage, STORAGE_KEYS.workbookSimulated);
-  const ctl = new PaneController(host, { workbook, personal }, persistent);
+  const { host, stores } = storesFor(await detectHost());
+  const ctl = new PaneController(host, stores, usableLocalStorage() !== null);
   await ctl.init();
   startApp(ctl);
 }

@@ -5,12 +5,11 @@
 import { getActiveLibrary, LIBRARY_FORMAT } from "../../src/library";
 import type { SystemRecord } from "../../src/library";
 import { emptySystem } from "../../src/taskpane/forms";
-import { STORAGE_KEYS } from "../../src/taskpane/storage";
 import { baseSubstance, baseSystemByPkb, freshController } from "./helpers";
 
 describe("saving entries", () => {
   test("a base entered by pKb is stored as its conjugate acid's pKa (pKw 13.995) and used by try-it", async () => {
-    const { ctl, storage } = await freshController();
+    const { ctl, memory } = await freshController();
     const sys = await ctl.saveSystem("workbook", baseSystemByPkb("4.2"));
     expect(sys).toMatchObject({ ok: true, id: "hb-7-amine" });
     if (!sys.ok) return;
@@ -21,8 +20,9 @@ describe("saving entries", () => {
     const sub = await ctl.saveSubstance("workbook", baseSubstance("hb-7-amine"));
     expect(sub.ok).toBe(true);
     // the layer is in storage, as a library file
-    const text = storage.getItem(STORAGE_KEYS.workbookSimulated);
-    expect(JSON.parse(text as string)).toMatchObject({ format: LIBRARY_FORMAT, schemaVersion: 1 });
+    const text = memory.workbook.peek();
+    expect(JSON.parse(text as string)).toMatchObject({ format: "protolyte-stored-library", library: { format: LIBRARY_FORMAT, schemaVersion: 1 } });
+    expect(memory.personal.peek()).toBeNull();
     // 10 mM of a base with pKa(BH+) 9.795: pH ≈ 14 − (pKb + pC)/2 ≈ 10.9
     const r = ctl.tryIt([{ name: "HB7 base", amount: "10 mM" }], "25");
     expect(r.ok).toBe(true);
@@ -52,7 +52,7 @@ describe("saving entries", () => {
   });
 
   test("an invalid entry is not saved and the problems name their fields", async () => {
-    const { ctl, storage } = await freshController();
+    const { ctl, memory } = await freshController();
     const s = emptySystem();
     s.name = "broken";
     s.topCharge = "1.5";
@@ -61,7 +61,7 @@ describe("saving entries", () => {
     expect(r.ok).toBe(false);
     if (r.ok) return;
     expect(r.issues.map((i) => i.path).sort()).toEqual(["steps[0].pKa.value", "topCharge"]);
-    expect(storage.getItem(STORAGE_KEYS.workbookSimulated)).toBeNull();
+    expect(memory.workbook.peek()).toBeNull();
     expect(getActiveLibrary().layers.workbook).toBeNull();
   });
 

@@ -2,27 +2,35 @@
 import { resetActiveLibrary } from "../../src/library";
 import { PaneController } from "../../src/taskpane/controller";
 import type { HostInfo } from "../../src/taskpane/host";
-import { KeyValueLayerStore, MemoryStorage, STORAGE_KEYS, WHERE } from "../../src/taskpane/storage";
+import { createMemoryStorage, type MemoryStorage } from "../../src/library";
+import { WHERE, type PaneStores } from "../../src/taskpane/storage";
 import { emptyStep, emptySubstance, emptySystem, type SubstanceInput, type SystemInput } from "../../src/taskpane/forms";
 
 export const BROWSER_HOST: HostInfo = { kind: "browser", reason: "not-in-office", detail: "not running inside Office" };
 
-export function memoryStores(storage = new MemoryStorage()) {
+export interface MemoryStores {
+  workbook: MemoryStorage;
+  personal: MemoryStorage;
+}
+
+/** Both layers in memory; `initial` is stored text to start from (to test damaged data). */
+export function memoryStores(initial: { workbook?: string; personal?: string } = {}): { memory: MemoryStores; stores: PaneStores } {
+  const memory = { workbook: createMemoryStorage(initial.workbook ?? null), personal: createMemoryStorage(initial.personal ?? null) };
   return {
-    storage,
+    memory,
     stores: {
-      workbook: new KeyValueLayerStore("workbook", WHERE.workbookSimulated, storage, STORAGE_KEYS.workbookSimulated),
-      personal: new KeyValueLayerStore("personal", WHERE.personal, storage, STORAGE_KEYS.personal),
+      workbook: { where: WHERE.workbookSimulated, storage: memory.workbook },
+      personal: { where: WHERE.personal, storage: memory.personal },
     },
   };
 }
 
-export async function freshController(storage = new MemoryStorage()): Promise<{ ctl: PaneController; storage: MemoryStorage }> {
+export async function freshController(initial: { workbook?: string; personal?: string } = {}): Promise<{ ctl: PaneController; memory: MemoryStores }> {
   resetActiveLibrary();
-  const { stores } = memoryStores(storage);
+  const { memory, stores } = memoryStores(initial);
   const ctl = new PaneController(BROWSER_HOST, stores);
   await ctl.init();
-  return { ctl, storage };
+  return { ctl, memory };
 }
 
 /** A fictional amine base of Halvorsen Biologics, entered by its pKb. */
