@@ -64,9 +64,14 @@ export interface SourceInput {
   title: string;
   authors: string;
   container: string;
+  edition: string;
+  volume: string;
+  pages: string;
   year: string;
   doi: string;
   url: string;
+  /** How locators in value records point into this source. */
+  locators: string;
   note: string;
 }
 
@@ -112,7 +117,7 @@ export function emptySubstance(): SubstanceInput {
 }
 
 export function emptySource(): SourceInput {
-  return { id: "", kind: "", title: "", authors: "", container: "", year: "", doi: "", url: "", note: "" };
+  return { id: "", kind: "", title: "", authors: "", container: "", edition: "", volume: "", pages: "", year: "", doi: "", url: "", locators: "", note: "" };
 }
 
 /** A number as typed: accepts the Unicode minus and surrounding spaces. */
@@ -257,6 +262,9 @@ export function buildSource(input: SourceInput): Built<SourceRecord> {
   setIf(record, "kind", input.kind);
   setIf(record, "authors", input.authors.trim());
   setIf(record, "container", input.container.trim());
+  setIf(record, "edition", input.edition.trim());
+  setIf(record, "volume", input.volume.trim());
+  setIf(record, "pages", input.pages.trim());
   if (input.year.trim() !== "") {
     const y = readNumber(input.year);
     if (y === null || !Number.isInteger(y)) issues.push({ path: "year", message: "a year such as 2019" });
@@ -264,6 +272,7 @@ export function buildSource(input: SourceInput): Built<SourceRecord> {
   }
   setIf(record, "doi", input.doi.trim());
   setIf(record, "url", input.url.trim());
+  setIf(record, "locators", input.locators.trim());
   setIf(record, "note", input.note.trim());
   return issues.length ? { ok: false, issues } : { ok: true, record, notes: [] };
 }
@@ -314,9 +323,13 @@ export function sourceToInput(id: string, r: SourceRecord): SourceInput {
     title: r.title,
     authors: r.authors ?? "",
     container: r.container ?? "",
+    edition: r.edition ?? "",
+    volume: r.volume ?? "",
+    pages: r.pages ?? "",
     year: num(r.year),
     doi: r.doi ?? "",
     url: r.url ?? "",
+    locators: r.locators ?? "",
     note: r.note ?? "",
   };
 }

@@ -267,7 +267,9 @@ export class EditorView {
       field("Authors", textInput(input.authors, (v) => (input.authors = v)), { path: "authors" }).wrap,
       el("div", { class: "row" }, field("Year", textInput(input.year, (v) => (input.year = v), { inputmode: "numeric" }), { path: "year" }).wrap, field("Kind", select(input.kind, kinds, (v) => (input.kind = v)), { path: "kind" }).wrap),
       field("Journal, book or series", textInput(input.container, (v) => (input.container = v)), { path: "container" }).wrap,
+      el("div", { class: "row" }, field("Edition", textInput(input.edition, (v) => (input.edition = v)), { path: "edition" }).wrap, field("Volume", textInput(input.volume, (v) => (input.volume = v)), { path: "volume" }).wrap, field("Pages", textInput(input.pages, (v) => (input.pages = v)), { path: "pages" }).wrap),
       el("div", { class: "row" }, field("DOI", textInput(input.doi, (v) => (input.doi = v), { placeholder: "10.xxxx/…" }), { path: "doi" }).wrap, field("Web address", textInput(input.url, (v) => (input.url = v), { placeholder: "https://…" }), { path: "url" }).wrap),
+      field("How values point into it (optional)", textArea(input.locators, (v) => (input.locators = v)), { path: "locators", hint: "For example: 'Table 3' names the table of pKa values." }).wrap,
       field("Note", textArea(input.note, (v) => (input.note = v)), { path: "note" }).wrap,
     ];
   }

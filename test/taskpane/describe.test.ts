@@ -1,0 +1,63 @@
+/** What the browser shows for entries: citations, statuses, overrides, search. */
+import { createLibrary, BUILTIN_LIBRARY, LIBRARY_FORMAT } from "../../src/library";
+import type { LibraryDoc, SourceRecord } from "../../src/library";
+import { citation, entryName, filterEntries, overrideText, valuesOf } from "../../src/taskpane/describe";
+
+const workbook: LibraryDoc = {
+  format: LIBRARY_FORMAT,
+  schemaVersion: 1 as const,
+  name: "Halvorsen Biologics",
+  systems: [
+    {
+      ...(BUILTIN_LIBRARY.systems ?? []).find((s) => s.id === "acetate")!,
+      steps: [{ pKa: { value: 4.8, unit: "1", conditions: "25 °C, I = 0", status: "common-practice" as const, note: "rounded value used on Halvorsen batch records" } }],
+    },
+    {
+      id: "hb-amine",
+      name: "HB amine",
+      topCharge: 1,
+      steps: [{ pKa: { value: 9.8, unit: "1", conditions: "25 °C, I = 0", status: "unverified" as const, note: "from memory" }, dH: { value: 45, unit: "kJ/mol", conditions: "25 °C", status: "unverified" as const, note: "estimate" } }],
+    },
+  ],
+};
+const lib = createLibrary({ builtin: BUILTIN_LIBRARY, workbook });
+const sources = (id: string) => lib.get(id, "source")?.record as SourceRecord | undefined;
+
+test("citations read like references and name unknown keys", () => {
+  expect(citation(sources("goldberg2002"), "goldberg2002")).toBe(
+    "R. N. Goldberg, N. Kishore, R. M. Lennen (2002). Thermodynamic quantities for the ionization reactions of buffers. Journal of Physical and Chemical Reference Data, 31, 231.",
+  );
+  expect(citation(undefined, "gone")).toBe("unknown source 'gone'");
+});
+
+test("published values show unit, conditions and their source with the locator", () => {
+  const acetic = lib.get("phosphate", "system")!;
+  const lines = valuesOf(acetic, sources);
+  expect(lines[0]).toMatchObject({ label: "pKa (step 1)", status: "published", flagged: false, conditions: "25 °C, I = 0" });
+  expect(lines[0].provenance).toMatch(/^R\. N\. Goldberg.*— entry: /);
+  const dH = lines.find((l) => l.label.startsWith("ΔrH°"))!;
+  expect(dH.amount).toMatch(/ kJ\/mol$/);
+});
+
+test("common-practice and unverified values are flagged and say so", () => {
+  const acetate = valuesOf(lib.get("acetate", "system")!, sources);
+  expect(acetate).toEqual([expect.objectContaining({ label: "pKa", amount: "4.8", statusText: "common practice", flagged: true, provenance: "common practice" })]);
+  const amine = valuesOf(lib.get("hb-amine", "system")!, sources);
+  expect(amine.map((v) => [v.label, v.statusText, v.flagged])).toEqual([
+    ["pKa", "from memory, unverified", true],
+    ["ΔrH°", "from memory, unverified", true],
+  ]);
+});
+
+test("an override names the layer it hides", () => {
+  expect(overrideText(lib.get("acetate", "system")!)).toBe("overrides the built-in entry");
+  expect(overrideText(lib.get("hb-amine", "system")!)).toBe("");
+});
+
+test("search matches names, aliases and ids, every word, any case; kind and layer filter", () => {
+  const all = lib.list();
+  expect(filterEntries(all, "TROMETAMOL", "all").map((e) => e.id)).toContain("tris-base");
+  expect(filterEntries(all, "dibasic heptahydrate", "substance").map((e) => e.id)).toEqual(["disodium-hydrogen-phosphate-heptahydrate"]);
+  expect(filterEntries(all, "", "system", "workbook").map(entryName)).toEqual(["acetate", "HB amine"]);
+  expect(filterEntries(all, "no such thing at all", "all")).toEqual([]);
+});
