@@ -1,0 +1,377 @@
+/**
+ * `npm run bench`: the speed figures of the add-in, in one process, printed as tables with units.
+ *
+ *   (a) engine solves per second: representative mixtures × activity model × temperature, via
+ *       solvePH on a fresh mixture and via a prepared mixture;
+ *   (b) a 10 000-row what-if sheet in the embedded spreadsheet engine (HyperFormula): =AQ.PH(...)
+ *       per row against the same sheet computing the closed-form Henderson–Hasselbalch value with
+ *       built-in functions (the comparison baseline only; the engine never uses that shortcut);
+ *   (c) AQ.ADJUST and AQ.RECIPE calls per second (the chem workflows directly while the AQ functions
+ *       are not wired yet — the output says which);
+ *   (d) production bundle sizes, raw and gzip (builds first unless --no-build).
+ *
+ * Options: --only=a,b,c,d   run some parts; --no-build   read dist/ as it is; --quick   shorter runs.
+ * Timings depend on the machine and its load: the header prints the machine, and every figure is the
+ * median of several timed runs after a warm-up. Not a test: nothing here asserts a speed.
+ */
+import { spawnSync } from "node:child_process";
+import { existsSync, readFileSync, readdirSync, statSync } from "node:fs";
+import { cpus, loadavg } from "node:os";
+import { join } from "node:path";
+import { gzipSync } from "node:zlib";
+import { prepare, solvePH, type ActivityModel, type Component, type Mixture } from "../src/chem";
+import * as workflows from "../src/chem/workflows";
+import { evaluateSheets } from "../src/cli/evaluate";
+import * as AQ from "../src/functions/functions";
+import { clearMixtureCache } from "../src/functions/mixture";
+import { getActiveLibrary } from "../src/library";
+
+const root = join(__dirname, "..");
+const argv = process.argv.slice(2);
+const only = (argv.find((a) => a.startsWith("--only="))?.slice(7).split(",") ?? ["a", "b", "c", "d"]).map((s) => s.trim());
+const quick = argv.includes("--quick");
+const build = !argv.includes("--no-build");
+const RUNS = quick ? 3 : 9;
+const RUN_SECONDS = quick ? 0.05 : 0.1;
+
+// ---- helpers -------------------------------------------------------------------------------
+
+function now(): number {
+  return Number(process.hrtime.bigint()) / 1e9;
+}
+
+function median(xs: number[]): number {
+  const s = [...xs].sort((a, b) => a - b);
+  const m = s.length >> 1;
+  return s.length % 2 ? s[m] : 0.5 * (s[m - 1] + s[m]);
+}
+
+let sink = 0;
+
+/**
+ * Calls per second of fn(i): the best of RUNS timed runs of ≈ RUN_SECONDS each, after a warm-up.
+ * The best run, not the mean: on a shared machine other processes only ever slow a run down.
+ */
+function rate(fn: (i: number) => number): number {
+  let n = 64;
+  let i = 0;
+  // Warm-up and calibration: grow n until one run takes a tenth of the target time.
+  for (;;) {
+    const t0 = now();
+    for (let k = 0; k < n; k++) sink += fn(i++);
+    if (now() - t0 > RUN_SECONDS / 10) break;
+    n *= 2;
+  }
+  n = Math.max(1, Math.round(n * 10));
+  const rates: number[] = [];
+  for (let r = 0; r < RUNS; r++) {
+    const t0 = now();
+    for (let k = 0; k < n; k++) sink += fn(i++);
+    rates.push(n / (now() - t0));
+  }
+  return Math.max(...rates);
+}
+
+function fmtRate(perSecond: number): string {
+  return `${Math.round(perSecond).toLocaleString("en-US")} /s`;
+}
+
+function fmtMicro(perSecond: number): string {
+  return `${(1e6 / perSecond).toFixed(2)} µs`;
+}
+
+function table(header: string[], rows: string[][]): void {
+  const widths = header.map((h, c) => Math.max(h.length, ...rows.map((r) => (r[c] ?? "").length)));
+  const line = (cells: string[]) => cells.map((x, c) => (c === 0 ? x.padEnd(widths[c]) : x.padStart(widths[c]))).join("  ");
+  console.log(line(header));
+  console.log(widths.map((w) => "-".repeat(w)).join("  "));
+  for (const r of rows) console.log(line(r));
+}
+
+function component(name: string): Component {
+  const r = getActiveLibrary().resolve(name);
+  if (!r.ok) throw new Error(`bench: ${r.message}`);
+  return r.component;
+}
+
+function check(ok: boolean, what: string): void {
+  if (!ok) throw new Error(`bench: ${what}`);
+}
+
+// ---- header ------------------------------------------------------------------------------
+
+const cpuList = cpus();
+console.log("Protolyte benchmark (npm run bench)");
+console.log(`date:    ${new Date().toISOString()}`);
+console.log(`machine: ${cpuList[0]?.model ?? "unknown cpu"}, ${cpuList.length} logical cores; node ${process.version} (${process.platform} ${process.arch})`);
+console.log(`load:    ${loadavg().map((x) => x.toFixed(2)).join(" / ")} (1 / 5 / 15 min load average at start: other processes share the cores)`);
+console.log(`method:  best of ${RUNS} timed runs after a warm-up (sheets: median of 3+); one core (single thread)`);
+console.log(`library: ${getActiveLibrary().fingerprint()}`);
+
+// ---- (a) engine ----------------------------------------------------------------------------
+
+interface MixCase {
+  label: string;
+  /** 35 slightly different mixtures, cycled so that nothing can be answered from a cache. */
+  variants: Mixture[];
+}
+
+const VARIANTS = 35;
+
+function variants(make: (i: number) => Mixture): Mixture[] {
+  return Array.from({ length: VARIANTS }, (_, i) => make(i));
+}
+
+function engineCases(): MixCase[] {
+  const aceticAcid = component("acetic acid");
+  const sodiumAcetate = component("sodium acetate");
+  const nah2po4 = component("NaH2PO4");
+  const nacl = component("NaCl");
+  const naoh = component("NaOH");
+  const citric = component("citric acid");
+  const na2hpo4 = component("Na2HPO4");
+  return [
+    {
+      label: "acetate 0.05/0.05 M",
+      variants: variants((i) => [
+        { component: aceticAcid, conc: 0.05 + (i % 7) * 1e-3 },
+        { component: sodiumAcetate, conc: 0.05 + (i % 5) * 1e-3 },
+      ]),
+    },
+    {
+      label: "phosphate 0.05 + NaCl 0.1 + NaOH 0.02 M",
+      variants: variants((i) => [
+        { component: nah2po4, conc: 0.05 + (i % 7) * 1e-3 },
+        { component: nacl, conc: 0.1 },
+        { component: naoh, conc: 0.02 + (i % 5) * 1e-3 },
+      ]),
+    },
+    {
+      label: "citrate 0.01 + phosphate 0.03 M",
+      variants: variants((i) => [
+        { component: citric, conc: 0.01 + (i % 7) * 1e-4 },
+        { component: na2hpo4, conc: 0.03 + (i % 5) * 1e-4 },
+      ]),
+    },
+  ];
+}
+
+function partA(): void {
+  console.log("\n(a) Engine: pH solves per second, one core");
+  console.log("    fresh    = solvePH(mixture, options): validate, aggregate and solve on every call");
+  console.log("    prepared = prepare(mixture) once, then p.solvePH(options) (what the functions' cache serves)");
+  const rows: string[][] = [];
+  const cases = engineCases();
+  // Warm-up of every path before any timing, so that the first case is not charged for the JIT.
+  for (const c of cases) for (let i = 0; i < 20_000; i++) sink += solvePH(c.variants[i % VARIANTS], { activity: i % 2 ? "davies" : "ideal", temperatureC: 25 + (i % 3) * 6 }).ok ? 1 : 0;
+  for (const c of cases) {
+    for (const activity of ["ideal", "davies"] as ActivityModel[]) {
+      for (const temperatureC of [25, 37]) {
+        const opts = { temperatureC, activity };
+        const prepared = c.variants.map((m) => {
+          const p = prepare(m);
+          check(p.ok, `${c.label} does not prepare`);
+          return p as Exclude<typeof p, { ok: false }>;
+        });
+        const fresh = rate((i) => {
+          const r = solvePH(c.variants[i % VARIANTS], opts);
+          return r.ok ? r.pH : NaN;
+        });
+        const warm = rate((i) => {
+          const r = prepared[i % VARIANTS].solvePH(opts);
+          return r.ok ? r.pH : NaN;
+        });
+        const first = prepared[0].solvePH(opts);
+        check(first.ok, `${c.label} does not solve`);
+        rows.push([c.label, activity, `${temperatureC} °C`, first.ok ? first.pH.toFixed(3) : "", fmtRate(fresh), fmtMicro(fresh), fmtRate(warm), fmtMicro(warm)]);
+      }
+    }
+  }
+  table(["mixture", "activity", "T", "pH", "fresh", "per solve", "prepared", "per solve"], rows);
+  console.log("    target: ≥ 200 000 Davies solves/s for phosphate + NaCl + NaOH");
+}
+
+// ---- (b) what-if sheet ---------------------------------------------------------------------
+
+const SHEET_ROWS = 10_000;
+
+type Raw = (string | number)[][];
+
+/** Row i: acetic acid and sodium acetate, mol/L, every row a different pair (100 × 100 grid). */
+function amountsOf(i: number): [number, number] {
+  return [0.01 + (i % 100) * 0.001, 0.01 + Math.floor(i / 100) * 0.001];
+}
+
+function whatIfSheet(rows: number, formula: (r: number) => string): Raw {
+  const sheet: Raw = [["acid mol/L", "salt mol/L", "pH", "", "acetic acid", "sodium acetate"]];
+  for (let i = 0; i < rows; i++) {
+    const [a, b] = amountsOf(i);
+    sheet.push([a, b, formula(i + 2)]);
+  }
+  return sheet;
+}
+
+const SHEETS: { label: string; formula: (r: number) => string }[] = [
+  { label: "=AQ.PH($E$1:$F$1,A2:B2)  (names in a fixed range)", formula: (r) => `=AQ.PH($E$1:$F$1,A${r}:B${r})` },
+  { label: '=AQ.PH({"acetic acid","sodium acetate"},A2:B2)  (inline array)', formula: (r) => `=AQ.PH({"acetic acid","sodium acetate"},A${r}:B${r})` },
+  { label: "=4.756+LOG10(B2/A2)  (Henderson–Hasselbalch, built-ins: baseline)", formula: (r) => `=4.756+LOG10(B${r}/A${r})` },
+];
+
+/** Seconds to build and evaluate the sheet and read every value back (evaluateSheets). */
+function sheetSeconds(sheet: Raw): { seconds: number; errors: number; sample: unknown } {
+  clearMixtureCache(); // every row is a first evaluation, as when a table is filled in
+  const t0 = now();
+  const [result] = evaluateSheets({ Sheet1: sheet });
+  const seconds = now() - t0;
+  return { seconds, errors: result.errors.length, sample: result.values[1]?.[2] };
+}
+
+function partB(): void {
+  console.log(`\n(b) What-if sheet: ${SHEET_ROWS.toLocaleString("en-US")} rows, HyperFormula via src/cli/evaluate.ts evaluateSheets`);
+  console.log("    columns A, B: acetic acid and sodium acetate, mol/L, a different pair on every row; C: the formula;");
+  console.log("    time = build the engine, evaluate every formula, read all values back (mixture cache cleared first)");
+  // Warm-up: JIT-compile HyperFormula's and our code on a smaller sheet of each kind.
+  for (const s of SHEETS) sheetSeconds(whatIfSheet(2000, s.formula));
+  const times: number[] = [];
+  const rows: string[][] = [];
+  for (const s of SHEETS) {
+    const sheet = whatIfSheet(SHEET_ROWS, s.formula);
+    const runs: number[] = [];
+    let last: ReturnType<typeof sheetSeconds> | undefined;
+    for (let r = 0; r < Math.max(3, RUNS - 2); r++) {
+      last = sheetSeconds(sheet);
+      runs.push(last.seconds);
+    }
+    const t = median(runs);
+    times.push(t);
+    check(last !== undefined && last.errors === 0, `${s.label}: ${last?.errors} error cells`);
+    rows.push([s.label, `${(t * 1000).toFixed(0)} ms`, `${((t / SHEET_ROWS) * 1e6).toFixed(1)} µs`, typeof last?.sample === "number" ? last.sample.toFixed(4) : String(last?.sample)]);
+  }
+  table(["sheet", "time", "per row", "C2"], rows);
+  const hh = times[2];
+  console.log(`    ratio AQ.PH / Henderson–Hasselbalch: ${(times[0] / hh).toFixed(2)}× (fixed range), ${(times[1] / hh).toFixed(2)}× (inline array)`);
+  console.log("    target: AQ.PH sheet within 2× the Henderson–Hasselbalch sheet's time");
+}
+
+// ---- (c) ADJUST and RECIPE -----------------------------------------------------------------
+
+type AnyFn = (...args: unknown[]) => unknown;
+
+function aqFunction(id: string): AnyFn | undefined {
+  const fn = (AQ as unknown as Record<string, unknown>)[id];
+  return typeof fn === "function" ? (fn as AnyFn) : undefined;
+}
+
+function workflow(name: string): AnyFn | undefined {
+  const fn = (workflows as unknown as Record<string, unknown>)[name];
+  return typeof fn === "function" ? (fn as AnyFn) : undefined;
+}
+
+function okValue(r: unknown): number {
+  const v = r as { ok?: boolean; value?: number; pH?: number };
+  if (v && v.ok === false) throw new Error(`bench: workflow failed: ${JSON.stringify(r)}`);
+  return typeof v?.value === "number" ? v.value : typeof v?.pH === "number" ? v.pH : 1;
+}
+
+function partC(): void {
+  console.log("\n(c) Workflow functions: calls per second, one core (target pH varied on every call)");
+  const rows: string[][] = [];
+  const targets = Array.from({ length: 101 }, (_, i) => 6.8 + i * 0.005);
+
+  const ADJUST = aqFunction("ADJUST");
+  if (ADJUST) {
+    const names = [["NaH2PO4"], ["Na2HPO4"]];
+    const amounts = [[0.03], [0.02]];
+    const r1 = rate((i) => ADJUST(names, amounts, targets[i % 101], "NaOH") as number);
+    const r2 = rate((i) => ADJUST(names, amounts, targets[i % 101], "NaOH", 1, 800) as number);
+    rows.push(["AQ.ADJUST(phosphate 30/20 mM, target, \"NaOH\")  mol/L", fmtRate(r1), fmtMicro(r1)]);
+    rows.push(["AQ.ADJUST(..., \"NaOH\", 1, 800)  litres of 1 M stock for 800 L", fmtRate(r2), fmtMicro(r2)]);
+  } else {
+    const adjust = workflow("adjust");
+    check(adjust !== undefined, "no adjust workflow");
+    const mix: Mixture = [
+      { component: component("NaH2PO4"), conc: 0.03 },
+      { component: component("Na2HPO4"), conc: 0.02 },
+    ];
+    const naoh = component("NaOH");
+    const r1 = rate((i) => okValue(adjust!(mix, naoh, targets[i % 101], {})));
+    const r2 = rate((i) => okValue(adjust!(mix, naoh, targets[i % 101], { stock: { conc: 1, volume: 800 } })));
+    rows.push(["[chem workflow, AQ.ADJUST not wired yet] adjust(phosphate 30/20 mM, NaOH, target) mol/L", fmtRate(r1), fmtMicro(r1)]);
+    rows.push(["[chem workflow, AQ.ADJUST not wired yet] adjust(..., stock 1 M, 800 L)", fmtRate(r2), fmtMicro(r2)]);
+  }
+
+  const RECIPE = aqFunction("RECIPE");
+  if (RECIPE) {
+    const r1 = rate((i) => ((RECIPE("NaH2PO4", "Na2HPO4", targets[i % 101], 0.05, 1) as unknown[][]).length));
+    const r2 = rate((i) => ((RECIPE("NaH2PO4", "Na2HPO4", targets[i % 101], 0.05, 1, 25, 0.15, "NaCl") as unknown[][]).length));
+    rows.push(["AQ.RECIPE(\"NaH2PO4\", \"Na2HPO4\", target, 0.05, 1)", fmtRate(r1), fmtMicro(r1)]);
+    rows.push(["AQ.RECIPE(..., 25, 0.15, \"NaCl\")  made up to I = 0.15 M", fmtRate(r2), fmtMicro(r2)]);
+  } else {
+    const recipe = workflow("recipe");
+    if (recipe === undefined) {
+      rows.push(["AQ.RECIPE: neither the function nor the chem workflow exists yet", "-", "-"]);
+    } else {
+      const acidForm = component("NaH2PO4");
+      const baseForm = component("Na2HPO4");
+      const salt = component("NaCl");
+      const r1 = rate((i) => okValue(recipe({ acidForm, baseForm, targetPH: targets[i % 101], totalConc: 0.05, volume: 1 }, {})));
+      const r2 = rate((i) => okValue(recipe({ acidForm, baseForm, targetPH: targets[i % 101], totalConc: 0.05, volume: 1, ionicStrength: 0.15, salt }, {})));
+      rows.push(["[chem workflow, AQ.RECIPE not wired yet] recipe(NaH2PO4/Na2HPO4, target, 0.05 M, 1 L)", fmtRate(r1), fmtMicro(r1)]);
+      rows.push(["[chem workflow, AQ.RECIPE not wired yet] recipe(..., I = 0.15 M with NaCl)", fmtRate(r2), fmtMicro(r2)]);
+    }
+  }
+  table(["call", "calls", "per call"], rows);
+}
+
+// ---- (d) bundle sizes ----------------------------------------------------------------------
+
+function newestSource(dir: string): number {
+  let newest = 0;
+  for (const name of readdirSync(dir, { withFileTypes: true })) {
+    const p = join(dir, name.name);
+    newest = Math.max(newest, name.isDirectory() ? newestSource(p) : statSync(p).mtimeMs);
+  }
+  return newest;
+}
+
+function kB(bytes: number): string {
+  return `${(bytes / 1000).toFixed(1)} kB`;
+}
+
+function partD(): void {
+  console.log("\n(d) Production bundles (kB = 1000 bytes; gzip level 9)");
+  const dist = join(root, "dist");
+  if (build) {
+    console.log("    building: npx webpack --mode production");
+    const r = spawnSync("npx", ["webpack", "--mode", "production", "--stats", "errors-warnings"], { cwd: root, encoding: "utf8" });
+    if (r.status !== 0) {
+      console.log(`    build FAILED (exit ${r.status}); sizes below are of the dist/ already there, if any`);
+      console.log((r.stdout + r.stderr).split("\n").slice(0, 20).map((l) => `      ${l}`).join("\n"));
+    }
+  }
+  const files = ["functions.js", "taskpane.js"];
+  if (!files.every((f) => existsSync(join(dist, f)))) {
+    console.log("    dist/ has no bundles: run without --no-build");
+    return;
+  }
+  const built = Math.min(...files.map((f) => statSync(join(dist, f)).mtimeMs));
+  const stale = built < newestSource(join(root, "src"));
+  const rows = files.map((f) => {
+    const bytes = readFileSync(join(dist, f));
+    const gz = gzipSync(bytes, { level: 9 }).length;
+    return [`dist/${f}`, kB(bytes.length), `${bytes.length.toLocaleString("en-US")} B`, kB(gz), `${gz.toLocaleString("en-US")} B`];
+  });
+  table(["bundle", "minified", "bytes", "gzip", "bytes"], rows);
+  if (stale) console.log("    NOTE: dist/ is older than the newest file in src/: these sizes may be stale");
+  console.log("    target: functions bundle ≤ 300 kB minified");
+}
+
+// ---- main ----------------------------------------------------------------------------------
+
+const parts: Record<string, () => void> = { a: partA, b: partB, c: partC, d: partD };
+for (const p of only) {
+  const run = parts[p];
+  if (run === undefined) throw new Error(`bench: unknown part '${p}' (use a, b, c, d)`);
+  run();
+}
+if (Number.isNaN(sink)) console.log("(a result was NaN)");
