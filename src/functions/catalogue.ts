@@ -18,11 +18,36 @@ const opt = (name: string) => ({ name, optional: true });
 
 export const CATALOGUE: readonly CatalogueEntry[] = [
   { id: "PH", fn: AQ.PH, params: [req("names"), req("amounts"), opt("temperature"), opt("activity")], result: "scalar" },
+  {
+    id: "ADJUST",
+    fn: AQ.ADJUST,
+    params: [req("names"), req("amounts"), req("target_pH"), req("titrant"), opt("titrant_conc"), opt("volume"), opt("temperature"), opt("activity")],
+    result: "scalar",
+  },
   { id: "BETA", fn: AQ.BETA, params: [req("names"), req("amounts"), opt("temperature"), opt("activity")], result: "scalar" },
+  { id: "CAPACITY", fn: AQ.CAPACITY, params: [req("names"), req("amounts"), req("delta_pH"), opt("temperature"), opt("activity")], result: "scalar" },
   { id: "SPECIES", fn: AQ.SPECIES, params: [req("names"), req("amounts"), opt("species"), opt("temperature"), opt("activity")], result: "matrix" },
   { id: "IONIC", fn: AQ.IONIC, params: [req("names"), req("amounts"), opt("temperature")], result: "scalar" },
   { id: "OSMOLARITY", fn: AQ.OSMOLARITY, params: [req("names"), req("amounts"), opt("temperature")], result: "scalar" },
   { id: "PKA", fn: AQ.PKA, params: [req("substance"), opt("step"), opt("temperature"), opt("ionic_strength")], result: "scalar" },
   { id: "MOLARMASS", fn: AQ.MOLARMASS, params: [req("substance")], result: "scalar" },
+  {
+    id: "RECIPE",
+    fn: AQ.RECIPE,
+    params: [req("acid_form"), req("base_form"), req("target_pH"), req("total_conc"), req("volume"), opt("temperature"), opt("ionic_strength"), opt("salt"), opt("activity")],
+    result: "matrix",
+  },
+  {
+    id: "CURVE",
+    fn: AQ.CURVE,
+    params: [req("names"), req("amounts"), req("titrant"), req("titrant_conc"), req("volume"), req("max_titrant_volume"), opt("points"), opt("temperature")],
+    result: "matrix",
+  },
+  {
+    id: "PHRANGE",
+    fn: AQ.PHRANGE,
+    params: [req("names"), req("amounts"), req("amount_tolerance"), opt("pKa_uncertainty"), opt("temperature")],
+    result: "matrix",
+  },
   { id: "CONSTANTS_ID", fn: AQ.CONSTANTS_ID, params: [], result: "scalar" },
 ];

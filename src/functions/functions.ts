@@ -13,6 +13,11 @@
 // associate calls the metadata plugin appends to this file would throw without it.
 import "./runtime-shim";
 import { guard } from "./errors";
+import { adjust } from "./aq/adjust";
+import { capacity } from "./aq/capacity";
+import { curve } from "./aq/curve";
+import { phRange } from "./aq/ph-range";
+import { recipe } from "./aq/recipe";
 import { beta } from "./aq/beta";
 import { constantsId } from "./aq/constants-id";
 import { ionic } from "./aq/ionic";
@@ -37,6 +42,33 @@ export function PH(names: any[][], amounts: any[][], temperature?: any, activity
 }
 
 /**
+ * Titrant needed to bring a mixture to a target pH: mol per litre of mixture, or, given a stock concentration and batch volume, litres of stock (its dilution included).
+ * @customfunction ADJUST
+ * @helpurl https://localhost:3000/help/adjust.html
+ * @param names Substance names of the mixture as it is now.
+ * @param amounts Concentrations, mol/L (or unit text), same shape as names.
+ * @param target_pH The pH to reach.
+ * @param titrant Name of the titrant (NaOH, HCl, or any library substance).
+ * @param [titrant_conc] Stock concentration of the titrant, mol/L. With volume, the result is litres of stock.
+ * @param [volume] Batch volume, L (or unit text such as "800 L"). Needs titrant_conc.
+ * @param [temperature] Temperature, °C (0–100). Default 25.
+ * @param [activity] Activity model: "davies" (default), "ideal" or "debye-huckel".
+ * @returns mol of titrant per litre of mixture; or litres of stock for the batch when titrant_conc and volume are given.
+ */
+export function ADJUST(
+  names: any[][],
+  amounts: any[][],
+  target_pH: any,
+  titrant: string,
+  titrant_conc?: any,
+  volume?: any,
+  temperature?: any,
+  activity?: string,
+): number {
+  return guard(() => adjust(names, amounts, target_pH, titrant, titrant_conc, volume, temperature, activity));
+}
+
+/**
  * Buffer value β of a mixture at its own pH: mol/L of strong base per unit rise in pH, for an infinitesimal addition.
  * @customfunction BETA
  * @helpurl https://localhost:3000/help/beta.html
@@ -48,6 +80,21 @@ export function PH(names: any[][], amounts: any[][], temperature?: any, activity
  */
 export function BETA(names: any[][], amounts: any[][], temperature?: any, activity?: string): number {
   return guard(() => beta(names, amounts, temperature, activity));
+}
+
+/**
+ * Strong base (delta > 0) or strong acid (delta < 0) that moves the pH of a mixture by delta, without dilution.
+ * @customfunction CAPACITY
+ * @helpurl https://localhost:3000/help/capacity.html
+ * @param names Substance names.
+ * @param amounts Concentrations, mol/L (or unit text), same shape as names.
+ * @param delta_pH Change in pH: positive for base, negative for acid.
+ * @param [temperature] Temperature, °C (0–100). Default 25.
+ * @param [activity] Activity model: "davies" (default), "ideal" or "debye-huckel".
+ * @returns mol/L of strong base (delta > 0) or strong acid (delta < 0), as a positive number.
+ */
+export function CAPACITY(names: any[][], amounts: any[][], delta_pH: any, temperature?: any, activity?: string): number {
+  return guard(() => capacity(names, amounts, delta_pH, temperature, activity));
 }
 
 /**
@@ -114,6 +161,77 @@ export function PKA(substance: string, step?: number, temperature?: any, ionic_s
  */
 export function MOLARMASS(substance: string): number {
   return guard(() => molarMass(substance));
+}
+
+/**
+ * Recipe for a buffer batch: what to weigh (or measure) of each component to reach a target pH and total concentration.
+ * @customfunction RECIPE
+ * @helpurl https://localhost:3000/help/recipe.html
+ * @param acid_form The acidic form (e.g. "NaH2PO4·H2O", "histidine", "Tris").
+ * @param base_form The basic form (e.g. "Na2HPO4·7H2O", "histidine HCl"), or a strong titrant ("NaOH", "HCl").
+ * @param target_pH The pH to reach.
+ * @param total_conc Total buffer concentration (the acid–base system), mol/L or unit text.
+ * @param volume Batch volume, L or unit text.
+ * @param [temperature] Temperature, °C (0–100). Default 25.
+ * @param [ionic_strength] Target ionic strength, mol/L, made up with the salt. Default: no salt added.
+ * @param [salt] Salt for the ionic strength. Default "NaCl".
+ * @param [activity] Activity model: "davies" (default), "ideal" or "debye-huckel".
+ * @returns A table with a header row: component, mol, grams (solids) or litres (liquid stocks).
+ */
+export function RECIPE(
+  acid_form: string,
+  base_form: string,
+  target_pH: any,
+  total_conc: any,
+  volume: any,
+  temperature?: any,
+  ionic_strength?: any,
+  salt?: string,
+  activity?: string,
+): any[][] {
+  return guard(() => recipe(acid_form, base_form, target_pH, total_conc, volume, temperature, ionic_strength, salt, activity));
+}
+
+/**
+ * Titration curve of a mixture with a titrant stock, dilution included: a two-column table (titrant volume, pH) ready to chart.
+ * @customfunction CURVE
+ * @helpurl https://localhost:3000/help/curve.html
+ * @param names Substance names of the mixture.
+ * @param amounts Concentrations, mol/L (or unit text), same shape as names.
+ * @param titrant Name of the titrant (e.g. "NaOH").
+ * @param titrant_conc Stock concentration of the titrant, mol/L or unit text.
+ * @param volume Starting volume of the mixture, L or unit text.
+ * @param max_titrant_volume Largest titrant volume to add, L or unit text.
+ * @param [points] Number of points, 2–1000. Default 51.
+ * @param [temperature] Temperature, °C (0–100). Default 25.
+ * @returns A table with a header row: titrant volume (L), pH.
+ */
+export function CURVE(
+  names: any[][],
+  amounts: any[][],
+  titrant: string,
+  titrant_conc: any,
+  volume: any,
+  max_titrant_volume: any,
+  points?: number,
+  temperature?: any,
+): any[][] {
+  return guard(() => curve(names, amounts, titrant, titrant_conc, volume, max_titrant_volume, points, temperature));
+}
+
+/**
+ * The lowest and highest pH over stated tolerances on the amounts (and optionally on the pKa values): the band to set a specification against.
+ * @customfunction PHRANGE
+ * @helpurl https://localhost:3000/help/phrange.html
+ * @param names Substance names.
+ * @param amounts Nominal concentrations, mol/L (or unit text), same shape as names.
+ * @param amount_tolerance Relative tolerance on every amount (0.02 for ±2 %), or a range of tolerances of the same shape as names.
+ * @param [pKa_uncertainty] ± uncertainty applied to every pKa, pH units. Default 0.
+ * @param [temperature] Temperature, °C (0–100). Default 25.
+ * @returns A table with a header row: low pH, high pH, method (an exhaustive worst case over all corners, or a flagged bounded search beyond 12 varied quantities).
+ */
+export function PHRANGE(names: any[][], amounts: any[][], amount_tolerance: any, pKa_uncertainty?: any, temperature?: any): any[][] {
+  return guard(() => phRange(names, amounts, amount_tolerance, pKa_uncertainty, temperature));
 }
 
 /**

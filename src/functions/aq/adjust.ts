@@ -1,0 +1,36 @@
+/**
+ * AQ.ADJUST: titrant to reach a target pH — mol per litre of mixture, or, with a stock concentration
+ * and a batch volume, litres of stock for the batch (dilution included). An unreachable target is
+ * #N/A with a message saying which way the titrant moves the pH and how far it can go.
+ */
+import { adjust as adjustMixture } from "../../chem/workflows";
+import { isBlank, plainNumber, quantity, text, type Cell } from "../args";
+import { badInput, finite, orThrow } from "../errors";
+import { readMixture } from "../mixture";
+import { resolveComponent } from "../substances";
+import { chemOptions } from "./options";
+
+export function adjust(
+  names: Cell,
+  amounts: Cell,
+  targetPH: Cell,
+  titrant: Cell,
+  titrantConc: Cell,
+  volume: Cell,
+  temperature: Cell,
+  activity: Cell,
+): number {
+  const { mixture } = readMixture(names, amounts);
+  const target = plainNumber(targetPH, "target_pH");
+  const component = resolveComponent(text(titrant, "titrant"));
+  const options = chemOptions(temperature, activity);
+  if (isBlank(titrantConc) && isBlank(volume)) {
+    return finite(orThrow(adjustMixture(mixture, component, target, options)).value, "titrant amount");
+  }
+  if (isBlank(titrantConc)) throw badInput("volume needs titrant_conc: give the stock concentration too, or leave both out for mol per litre");
+  if (isBlank(volume)) throw badInput("titrant_conc needs volume: give the batch volume too (the result is then litres of stock), or leave both out for mol per litre");
+  const conc = quantity(titrantConc, "titrant_conc", "concentration", { molarMass: component.molarMass });
+  const litres = quantity(volume, "volume", "volume");
+  const stock = { conc, volume: litres };
+  return finite(orThrow(adjustMixture(mixture, component, target, { ...options, stock })).value, "litres of stock");
+}

@@ -1,0 +1,56 @@
+/**
+ * AQ.PHRANGE: the lowest and highest pH over the stated tolerances, as a table with a header row:
+ *   low pH | high pH | method
+ * The method column says how the band was found, for a reviewer: an exhaustive worst case over all
+ * 2^k corners (with refinement), or — beyond 12 varied quantities — a bounded local search that is
+ * not exhaustive (the true band may be wider).
+ * amount_tolerance is one relative tolerance for every amount (0.02 or "2 %") or a range of the same
+ * shape as names (blank names are skipped, as in names/amounts).
+ */
+import { phRange as phRangeOf, PHRANGE_MAX_EXHAUSTIVE, type PHRangeValue } from "../../chem/workflows";
+import { cellsOf, isBlank, plainNumber, position, shapeOf, type Cell } from "../args";
+import { badInput, finite, orThrow } from "../errors";
+import { readMixture } from "../mixture";
+import { chemOptions } from "./options";
+
+export const PHRANGE_HEADER = ["low pH", "high pH", "method"];
+
+/** A relative tolerance: 0.02, "0.02" or "2 %". */
+function relative(value: Cell, what: string): number {
+  if (typeof value === "string" && value.trim().endsWith("%")) {
+    return plainNumber(value.trim().slice(0, -1).trim(), what) / 100;
+  }
+  return plainNumber(value, what);
+}
+
+/** One tolerance per mixture entry, aligned with readMixture's entries (blank names skipped). */
+function tolerances(names: Cell, amountTolerance: Cell): number | number[] {
+  const tShape = shapeOf(amountTolerance);
+  if (tShape[0] === 1 && tShape[1] === 1) return relative(cellsOf(amountTolerance)[0].value, "amount_tolerance");
+  const nShape = shapeOf(names);
+  if (nShape[0] !== tShape[0] || nShape[1] !== tShape[1]) {
+    throw badInput(`amount_tolerance is ${tShape[0]}×${tShape[1]} cells but names is ${nShape[0]}×${nShape[1]}: give one tolerance, or one per name`);
+  }
+  const tCells = cellsOf(amountTolerance);
+  const out: number[] = [];
+  cellsOf(names).forEach((cell, i) => {
+    if (isBlank(cell.value)) return;
+    out.push(relative(tCells[i].value, `amount_tolerance${position(cell.row, cell.col, nShape)}`));
+  });
+  return out;
+}
+
+function methodText(r: PHRangeValue): string {
+  const k = r.quantities.length;
+  if (r.method === "none") return "no tolerance given: the nominal pH";
+  if (r.method === "corners") return `worst case over all ${2 ** k} corners of ${k} varied quantit${k === 1 ? "y" : "ies"}, refined`;
+  return `bounded local search, not exhaustive (${k} varied quantities > ${PHRANGE_MAX_EXHAUSTIVE}): the true band may be wider`;
+}
+
+export function phRange(names: Cell, amounts: Cell, amountTolerance: Cell, pKaUncertainty: Cell, temperature: Cell): unknown[][] {
+  const { mixture } = readMixture(names, amounts);
+  const tol = tolerances(names, amountTolerance);
+  const u = plainNumber(pKaUncertainty, "pKa_uncertainty", 0);
+  const r = orThrow(phRangeOf(mixture, tol, { ...chemOptions(temperature), pKaUncertainty: u }));
+  return [PHRANGE_HEADER, [finite(r.low, "low pH"), finite(r.high, "high pH"), methodText(r)]];
+}

@@ -1,0 +1,61 @@
+/**
+ * AQ.RECIPE: what to weigh for a buffer batch, as a table with a header row:
+ *   component | mol | grams | litres of stock
+ * grams = molar mass × mol (hydrate water included) for a solid; for a component named with a
+ * stock concentration ("HCl 1 M", "1 M NaOH") the litres of that stock instead. Make up to the batch
+ * volume with water. The forms are a conjugate pair of one system (x + y = total_conc solved for the
+ * pH), or one form and a strong titrant (the titrant from the adjust workflow); with ionic_strength
+ * the salt (default NaCl) is added so that the solved ionic strength equals it.
+ */
+import { recipe as recipeOf, type RecipeRequest } from "../../chem/workflows";
+import { isBlank, plainNumber, quantity, text, type Cell } from "../args";
+import { badInput, finite, orThrow } from "../errors";
+import { resolveComponent } from "../substances";
+import { chemOptions } from "./options";
+import { resolveWithStock } from "./stock-name";
+
+export const RECIPE_HEADER = ["component", "mol", "grams", "litres of stock"];
+
+export function recipe(
+  acidForm: Cell,
+  baseForm: Cell,
+  targetPH: Cell,
+  totalConc: Cell,
+  volume: Cell,
+  temperature: Cell,
+  ionicStrength: Cell,
+  salt: Cell,
+  activity: Cell,
+): unknown[][] {
+  const acid = resolveWithStock(text(acidForm, "acid_form"), "acid_form");
+  const base = resolveWithStock(text(baseForm, "base_form"), "base_form");
+  if (acid.component.id === base.component.id) throw badInput(`acid_form and base_form are the same substance ('${acid.component.name}'): give two forms, or a form and a titrant`);
+  const stocks: Record<string, number> = {};
+  if (acid.stockConc !== undefined) stocks[acid.component.id] = acid.stockConc;
+  if (base.stockConc !== undefined) stocks[base.component.id] = base.stockConc;
+  const req: RecipeRequest = {
+    acidForm: acid.component,
+    baseForm: base.component,
+    targetPH: plainNumber(targetPH, "target_pH"),
+    totalConc: quantity(totalConc, "total_conc", "concentration"),
+    volume: quantity(volume, "volume", "volume"),
+    stocks,
+  };
+  if (!isBlank(ionicStrength)) {
+    req.ionicStrength = quantity(ionicStrength, "ionic_strength", "concentration");
+    req.salt = resolveComponent(isBlank(salt) ? "NaCl" : text(salt, "salt"));
+  } else if (!isBlank(salt)) {
+    throw badInput("salt is used only with ionic_strength: give the target ionic strength too");
+  }
+  const r = orThrow(recipeOf(req, chemOptions(temperature, activity)));
+  const rows: unknown[][] = [RECIPE_HEADER];
+  for (const line of r.lines) {
+    rows.push([
+      line.name,
+      finite(line.mol, "mol"),
+      line.grams === undefined ? "" : finite(line.grams, "grams"),
+      line.litres === undefined ? "" : finite(line.litres, "litres"),
+    ]);
+  }
+  return rows;
+}
