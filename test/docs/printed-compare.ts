@@ -5,7 +5,8 @@
  * half a unit in the last printed digit (3.776 → ±0.0005; 1.70e-7 → ±5e-10), but never tighter
  * than 1e-12 relative, because results printed with all 17 significant digits can differ in the last
  * digits between platforms' floating-point libraries. Anything else (text, error values and their
- * messages) must match exactly.
+ * messages) must match exactly. Trailing blank cells are ignored (an editor may strip the trailing
+ * tabs of a line; they are invisible either way).
  */
 const NUMBER = /^[+-]?(\d+)(?:\.(\d+))?(?:[eE]([+-]?\d+))?$/;
 
@@ -24,8 +25,8 @@ export function comparePrinted(printed: readonly string[], actual: readonly stri
     return `printed ${printed.length} line(s), the function now gives ${actual.length}:\n  printed: ${printed.join(" / ")}\n  actual:  ${actual.join(" / ")}`;
   }
   for (let i = 0; i < printed.length; i++) {
-    const p = printed[i].split("\t");
-    const a = actual[i].split("\t");
+    const p = printed[i].replace(/[\t ]+$/, "").split("\t");
+    const a = actual[i].replace(/[\t ]+$/, "").split("\t");
     if (p.length !== a.length) return `line ${i + 1}: printed ${p.length} cell(s), actual ${a.length}\n  printed: ${printed[i]}\n  actual:  ${actual[i]}`;
     for (let j = 0; j < p.length; j++) {
       const tol = printedTolerance(p[j]);
