@@ -116,6 +116,18 @@ describe("AQ.RECIPE", () => {
     expectNear(num(`=AQ.IONIC({${names}},{${concs}})`), 0.15, 1e-9, "ionic strength fed back");
   });
 
+  test("a stock concentration may lead or trail the name, with or without parentheses", () => {
+    const a = table('=AQ.RECIPE("citric acid","1 M NaOH",5,0.02,1)');
+    const b = table('=AQ.RECIPE("citric acid","NaOH (1000 mM)",5,0.02,1)');
+    expect(a[2][0]).toBe("sodium hydroxide");
+    expect(a[2][2]).toBe("");
+    expectNear(a[2][3] as number, a[2][1] as number, 1e-15, "litres of 1 M NaOH = mol");
+    expect(b[2][3]).toBe(a[2][3]);
+    // Without a stock, NaOH (a solid) comes in grams.
+    const c = table('=AQ.RECIPE("citric acid","NaOH",5,0.02,1)');
+    expectNear(c[2][2] as number, (c[2][1] as number) * num('=AQ.MOLARMASS("NaOH")'), 1e-12, "grams of NaOH");
+  });
+
   test("a pair cannot reach past its ends: #N/A with the span", () => {
     expectError('=AQ.RECIPE("KH2PO4","Na2HPO4",9.5,0.05,1)', "#N/A", /span pH .* to .*: the target 9\.50 is outside/);
   });
