@@ -93,6 +93,10 @@ const T_IDENTITY: Tolerance = {
   value: 1e-9,
   reason: "ADJUST refines the amount until |pH − target| ≤ 1e-11; 1e-9 leaves room for rounding as the amount passes through the cells",
 };
+const T_IDENTITY_RECIPE: Tolerance = {
+  value: 1e-9,
+  reason: "RECIPE refines the composition until |pH − target| ≤ 1e-11 (and the salt until |I − I*| ≤ 1e-12·I*); 1e-9 leaves room for rounding as the amounts pass through the cells",
+};
 
 // ---- 1. primary pH standards ----------------------------------------------------------------
 
@@ -343,7 +347,7 @@ const PREP_CASES: ValidationCase[] = [
 
 // ---- 8. identities: the workflow functions fed back through AQ.PH ------------------------------------
 
-/** Identity checks, as small sheets a user could type (added to CASES once AQ.ADJUST and AQ.RECIPE are registered). */
+/** Identity checks, as small sheets a user could type: a workflow function's result fed back through AQ.PH or AQ.IONIC. */
 export const IDENTITY_CASES: ValidationCase[] = [
   {
     id: "ID-ADJUST-PER-LITRE",
@@ -383,6 +387,77 @@ export const IDENTITY_CASES: ValidationCase[] = [
   },
 ];
 
+const RECIPE_SALT_SHEET: SheetCheck["rows"] = [
+  ['=AQ.RECIPE("NaH2PO4·2H2O","Na2HPO4·7H2O",7,0.02,500,25,0.15)', null, null, null, "mol/L"],
+  [null, null, null, null, "=B2/500"],
+  [null, null, null, null, "=B3/500"],
+  [null, null, null, null, "=B4/500"],
+  ["pH", "=AQ.PH(A2:A4,E2:E4,25)", "ionic strength", "=AQ.IONIC(A2:A4,E2:E4,25)", null],
+];
+
+IDENTITY_CASES.push(
+  {
+    id: "ID-RECIPE-PAIR",
+    group: "9. Identities (results fed back through AQ.PH)",
+    source: "definition of AQ.RECIPE: the amounts it lists, made up to the batch volume, give the target pH at the stated temperature",
+    conditions: "histidine HCl monohydrate + L-histidine, 20 mM total, 1 L, target pH 6.00 at 5 °C",
+    sheet: {
+      rows: [
+        ['=AQ.RECIPE("histidine HCl monohydrate","L-histidine",6,0.02,1,5)', null, null, null, "mol/L"],
+        [null, null, null, null, "=B2/1"],
+        [null, null, null, null, "=B3/1"],
+        ["pH at 5 °C", "=AQ.PH(A2:A3,E2:E3,5)", null, null, null],
+      ],
+      cell: "B4",
+    },
+    expected: 6,
+    status: "identity",
+    unit: "pH",
+    tolerance: T_IDENTITY_RECIPE,
+  },
+  {
+    id: "ID-RECIPE-SALT-PH",
+    group: "9. Identities (results fed back through AQ.PH)",
+    source: "definition of AQ.RECIPE with a target ionic strength: the amounts it lists give the target pH",
+    conditions: "NaH₂PO₄·2H₂O + Na₂HPO₄·7H₂O, 20 mM total, 500 L, target pH 7.00 at 25 °C, I = 0.15 mol/L with NaCl",
+    sheet: { rows: RECIPE_SALT_SHEET, cell: "B5" },
+    expected: 7,
+    status: "identity",
+    unit: "pH",
+    tolerance: T_IDENTITY_RECIPE,
+  },
+  {
+    id: "ID-RECIPE-SALT-I",
+    group: "9. Identities (results fed back through AQ.PH)",
+    source: "definition of AQ.RECIPE with a target ionic strength: the amounts it lists give the target ionic strength (AQ.IONIC)",
+    conditions: "NaH₂PO₄·2H₂O + Na₂HPO₄·7H₂O, 20 mM total, 500 L, target pH 7.00 at 25 °C, I = 0.15 mol/L with NaCl",
+    sheet: { rows: RECIPE_SALT_SHEET, cell: "D5" },
+    expected: 0.15,
+    status: "identity",
+    unit: "mol/L",
+    tolerance: T_IDENTITY_RECIPE,
+  },
+  {
+    id: "ID-RECIPE-TITRANT",
+    group: "9. Identities (results fed back through AQ.PH)",
+    source: "definition of AQ.RECIPE with a titrant stock: the form and the litres of stock it lists give the target pH",
+    conditions: "Tris base + 1 M hydrochloric acid, 50 mM Tris, 1 L, target pH 7.50 at 25 °C",
+    sheet: {
+      rows: [
+        ['=AQ.RECIPE("Tris","HCl 1 M",7.5,0.05,1)', null, null, null, "mol/L"],
+        [null, null, null, null, "=B2/1"],
+        [null, null, null, null, "=D3*1/1"],
+        ["pH", "=AQ.PH(A2:A3,E2:E3)", null, null, null],
+      ],
+      cell: "B4",
+    },
+    expected: 7.5,
+    status: "identity",
+    unit: "pH",
+    tolerance: T_IDENTITY_RECIPE,
+  },
+);
+
 export const CASES: ValidationCase[] = [
   ...STANDARDS_25,
   ...STANDARDS_T,
@@ -392,6 +467,7 @@ export const CASES: ValidationCase[] = [
   ...PK_CASES,
   ...MM_CASES,
   ...PREP_CASES,
+  ...IDENTITY_CASES,
 ];
 
 // ---- helpers ----------------------------------------------------------------------------------------

@@ -47,7 +47,8 @@ function what(c: ValidationCase): string {
 
 function fmt(x: number | null, digits: number, signed = false): string {
   if (x === null) return "—";
-  const s = x.toFixed(digits);
+  // A deviation too small to show at this precision is shown in exponent form rather than as ±0.
+  const s = x !== 0 && Math.abs(x) < 0.5 * Math.pow(10, -digits) ? x.toExponential(1) : x.toFixed(digits);
   return signed && x >= 0 ? `+${s}` : s;
 }
 

@@ -20,14 +20,8 @@ import { printedLines } from "../../scripts/docs/printed";
 import { loadMetadata, type MetaFunction } from "./metadata";
 import { comparePrinted } from "./printed-compare";
 
-/** Documented functions whose implementation is being wired into the functions layer. */
-const PENDING: Record<string, string> = {
-  ADJUST: "workflow function being wired into src/functions (chem/workflows/adjust.ts exists)",
-  CAPACITY: "workflow function being wired into src/functions (chem/workflows/capacity.ts exists)",
-  CURVE: "workflow function being wired into src/functions (chem/workflows/curve.ts exists)",
-  PHRANGE: "workflow function being wired into src/functions (chem/workflows/ph-range.ts exists)",
-  RECIPE: "workflow function being wired into src/functions (chem/workflows/recipe.ts in progress)",
-};
+/** Documented functions that are not registered yet, with the reason (none at present). */
+const PENDING: Record<string, string> = {};
 
 let functions: MetaFunction[] = [];
 const pages = new Map<string, Page>();

@@ -33,7 +33,7 @@ describe("validation cases", () => {
 
   test("covers each group the report promises", () => {
     const groups = new Set(CASES.map((c) => c.group.replace(/^\d+\. /, "")));
-    for (const g of ["Primary pH standards at 25 °C", "Primary pH standards at other temperatures", "European Pharmacopoeia reference buffer solutions", "Buffer values of standards", "Ionization constant of water", "pKa at other temperatures (I = 0)", "Molar masses", "Preparation tables (mixtures of stocks)"]) {
+    for (const g of ["Primary pH standards at 25 °C", "Primary pH standards at other temperatures", "European Pharmacopoeia reference buffer solutions", "Buffer values of standards", "Ionization constant of water", "pKa at other temperatures (I = 0)", "Molar masses", "Preparation tables (mixtures of stocks)", "Identities (results fed back through AQ.PH)"]) {
       expect(groups.has(g)).toBe(true);
     }
   });
