@@ -137,8 +137,18 @@ export function searchText(entry: MergedEntry): string {
   return parts.join(" \u0001 ").toLowerCase();
 }
 
-/** Entries whose text contains every word of the query (case-insensitive). */
+const KIND_ORDER: readonly EntryKind[] = ["substance", "system", "ion", "source", "atomicWeight"];
+const LAYER_FIRST: readonly LayerName[] = ["personal", "workbook", "builtin"];
+
+/**
+ * Entries whose text contains every word of the query (case-insensitive), substances first, then
+ * systems, ions, sources and atomic weights; within a kind, the user's own entries come first.
+ */
 export function filterEntries(entries: readonly MergedEntry[], query: string, kind: EntryKind | "all", layer: LayerName | "all" = "all"): MergedEntry[] {
   const words = query.toLowerCase().split(/\s+/).filter((w) => w !== "");
-  return entries.filter((e) => (kind === "all" || e.kind === kind) && (layer === "all" || e.layer === layer) && words.every((w) => searchText(e).includes(w)));
+  return entries
+    .filter((e) => (kind === "all" || e.kind === kind) && (layer === "all" || e.layer === layer) && words.every((w) => searchText(e).includes(w)))
+    .map((e, i) => ({ e, i }))
+    .sort((a, b) => KIND_ORDER.indexOf(a.e.kind) - KIND_ORDER.indexOf(b.e.kind) || LAYER_FIRST.indexOf(a.e.layer) - LAYER_FIRST.indexOf(b.e.layer) || a.i - b.i)
+    .map((x) => x.e);
 }

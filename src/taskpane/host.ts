@@ -19,7 +19,7 @@ export const OFFICE_READY_TIMEOUT_MS = 8000;
 export async function detectHost(g: Record<string, unknown> = globalThis as unknown as Record<string, unknown>, timeoutMs = OFFICE_READY_TIMEOUT_MS): Promise<HostInfo> {
   const office = g.Office as OfficeLike | undefined;
   if (!office || typeof office.onReady !== "function") {
-    return { kind: "browser", reason: "no-office-js", detail: "office.js did not load (offline or blocked): running as a plain browser page" };
+    return { kind: "browser", reason: "no-office-js", detail: "The Office library (office.js) did not load, offline or blocked: running as a plain browser page" };
   }
   let timer: ReturnType<typeof setTimeout> | undefined;
   const timeout = new Promise<"timeout">((resolve) => {
@@ -30,14 +30,14 @@ export async function detectHost(g: Record<string, unknown> = globalThis as unkn
     if (info === "timeout") return { kind: "browser", reason: "timeout", detail: "Office did not answer in time: running as a plain browser page" };
     const host = info?.host;
     if (host === null || host === undefined) {
-      return { kind: "browser", reason: "not-in-office", detail: "not running inside Office: running as a plain browser page" };
+      return { kind: "browser", reason: "not-in-office", detail: "Not running inside Office: running as a plain browser page" };
     }
     if (String(host) === "Excel" && typeof g.Excel === "object" && g.Excel !== null) {
       return { kind: "excel", platform: String(info.platform ?? "") };
     }
-    return { kind: "browser", reason: "other-host", detail: `opened in ${String(host)}, not Excel: running against browser storage` };
+    return { kind: "browser", reason: "other-host", detail: `Opened in ${String(host)}, not Excel: running against browser storage` };
   } catch (e) {
-    return { kind: "browser", reason: "error", detail: `office.js failed (${e instanceof Error ? e.message : String(e)}): running as a plain browser page` };
+    return { kind: "browser", reason: "error", detail: `The Office library failed (${e instanceof Error ? e.message : String(e)}): running as a plain browser page` };
   } finally {
     if (timer !== undefined) clearTimeout(timer);
   }

@@ -18,7 +18,7 @@ function storesFor(host: HostInfo): { host: HostInfo; stores: PaneStores } {
     const workbook = run ? workbookStore(excel, run) : null;
     if (workbook) return { host, stores: { workbook, personal: personalStore(ls, true) } };
     return {
-      host: { kind: "browser", reason: "other-host", detail: "this Excel has no workbook settings (ExcelApi 1.4): the workbook library is kept in browser storage instead" },
+      host: { kind: "browser", reason: "other-host", detail: "This Excel has no workbook settings (ExcelApi 1.4): the workbook library is kept in browser storage instead" },
       stores: browserStores(ls),
     };
   }

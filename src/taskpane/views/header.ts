@@ -13,7 +13,7 @@ export function renderHeader(ctl: PaneController): void {
     `Workbook library: ${ctl.stores.workbook.where}`,
     `personal library: ${ctl.stores.personal.where}`,
   ];
-  let lead = host.kind === "excel" ? "In Excel." : `${host.detail[0].toUpperCase()}${host.detail.slice(1)}.`;
+  let lead = host.kind === "excel" ? "In Excel." : `${host.detail}.`;
   if (!ctl.persistent) lead += " Browser storage is unavailable: changes last until the page closes.";
   where.textContent = `${lead} ${parts.join("; ")}.`;
 }

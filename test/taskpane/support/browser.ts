@@ -14,10 +14,25 @@ export const DIST = path.join(ROOT, "dist");
 export const OFFICE_CDN = "https://appsforoffice.microsoft.com/lib/1/hosted/";
 const OFFICE_NPM = path.join(ROOT, "node_modules/@microsoft/office-js/dist");
 
-/** Build dist/ when it is missing or has no task pane. */
+function newestMtime(dir: string): number {
+  let newest = 0;
+  for (const f of fs.readdirSync(dir, { withFileTypes: true })) {
+    const p = path.join(dir, f.name);
+    newest = Math.max(newest, f.isDirectory() ? newestMtime(p) : fs.statSync(p).mtimeMs);
+  }
+  return newest;
+}
+
+/**
+ * Build dist/ (`npx webpack --mode production`) when it is missing, or older than the task pane's
+ * sources (`npm test` always builds first; this covers `npx jest test/taskpane` after an edit).
+ */
 export function ensureBuilt(): void {
-  if (fs.existsSync(path.join(DIST, "taskpane.html")) && fs.existsSync(path.join(DIST, "taskpane.js"))) return;
-  execSync("npx webpack --mode production", { cwd: ROOT, stdio: "pipe", timeout: 180000 });
+  const html = path.join(DIST, "taskpane.html");
+  const js = path.join(DIST, "taskpane.js");
+  const fresh = fs.existsSync(html) && fs.existsSync(js) && fs.statSync(js).mtimeMs >= newestMtime(path.join(ROOT, "src/taskpane"));
+  if (fresh) return;
+  execSync("npx webpack --mode production --stats errors-only", { cwd: ROOT, stdio: "pipe", timeout: 240000 });
 }
 
 export interface Launched {
