@@ -27,6 +27,10 @@ const TABLE_FUNCTIONS = CATALOGUE.filter((c) => c.result === "matrix").map((c) =
 
 const WIDTHS = [56, 20, 20, 16, 22, 12];
 
+interface ArrayFormulaSheet {
+  fillFormula(range: string, formula: string, results: undefined, shareType: "array" | "shared"): void;
+}
+
 function isTableFormula(text: string): boolean {
   const t = text.trim();
   return TABLE_FUNCTIONS.some((f) => t.startsWith(`=${f}`));
@@ -58,7 +62,8 @@ export async function makeDemoWorkbook(csvText: string): Promise<ExcelJS.Workboo
         if (isTableFormula(content)) {
           const size = spillSize(evaluated.values, cells, r, c);
           const ref = `${columnName(c)}${r + 1}:${columnName(c + size.cols - 1)}${r + size.rows}`;
-          ws.fillFormula(ref, content.slice(1), undefined, "array" as never);
+          // exceljs supports shareType "array" at run time; its typings omit the fourth parameter.
+          (ws as unknown as ArrayFormulaSheet).fillFormula(ref, content.slice(1), undefined, "array");
         } else {
           cell.value = { formula: content.slice(1) } as ExcelJS.CellFormulaValue;
         }
