@@ -10,6 +10,7 @@ import { FilesView } from "./views/files";
 import { renderHeader, renderProblems } from "./views/header";
 import { setupTabs } from "./views/tabs";
 import { TryView } from "./views/try";
+import { message } from "./views/ui";
 
 export function startApp(ctl: PaneController): void {
   const statusBox = byId("status");
@@ -34,6 +35,7 @@ export function startApp(ctl: PaneController): void {
     files.renderPreview();
     tryView.refresh();
   };
+  if (ctl.startupWarnings.length) status(message("warn", ctl.startupWarnings.join(" ")));
   editor.render();
   files.render();
   tryView.render();

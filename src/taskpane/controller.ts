@@ -89,6 +89,8 @@ export class PaneController {
   library: Library;
   readonly problems = new Map<UserLayer, StoredProblem>();
   pendingImport: ImportPreview | null = null;
+  /** Problems met while starting (a failed recalculation), for the status line. */
+  readonly startupWarnings: string[] = [];
   private readonly listeners = new Set<Listener>();
   private queue: Promise<unknown> = Promise.resolve();
 
@@ -124,14 +126,19 @@ export class PaneController {
       for (const layer of ["workbook", "personal"] as const) {
         const where = this.stores[layer].where;
         const r = await loadLayer(layer, this.stores[layer].storage);
-        if (r.ok) continue;
+        if (r.ok) {
+          // Cells may have been calculated before this layer was in effect (Excel: recalculate).
+          const after = r.blob && this.stores[layer].afterChange ? await this.stores[layer].afterChange!() : null;
+          if (after) this.startupWarnings.push(after);
+          continue;
+        }
         const lead = {
           corrupt: "is damaged or not a Protolyte library",
           "newer-version": "was saved by a newer version of Protolyte",
           unavailable: "cannot be reached",
           "read-failed": "could not be read",
         }[r.code];
-        this.problems.set(layer, { layer, code: r.code, message: `The stored ${where} library ${lead}: ${r.message}. It is not in use; the layers below it apply.`, raw: r.raw });
+        this.problems.set(layer, { layer, code: r.code, message: `The stored ${layer} library (${where}) ${lead}: ${r.message}. It is not in use; the layers below it apply.`, raw: r.raw });
       }
       this.changed();
     });
@@ -153,7 +160,7 @@ export class PaneController {
   /** Why a layer cannot be written now, or null. */
   blocked(layer: UserLayer): string | null {
     const p = this.problems.get(layer);
-    return p ? `The stored ${this.stores[layer].where} library could not be read. Export its stored text, then reset it, before saving into it (nothing was changed).` : null;
+    return p ? `The stored ${layer} library could not be read. Export its stored text, then reset it, before saving into it (nothing was changed).` : null;
   }
 
   /** Validate, store and apply a layer's next file. `entryPath` maps validator paths back to the edited entry's fields. */
@@ -217,7 +224,7 @@ export class PaneController {
       const index = at >= 0 ? at : list.length;
       list[index] = record;
       (doc as unknown as Record<string, unknown>)[SECTION[kind]] = list;
-      const r = await this.commit(layer, doc, `${SECTION[kind]}[${index}]`, `Saved '${record.name}' in the ${this.stores[layer].where} library.`, built.notes);
+      const r = await this.commit(layer, doc, `${SECTION[kind]}[${index}]`, `Saved '${record.name}' in the ${layer} library.`, built.notes);
       return r.ok ? { ...r, id: record.id } : r;
     });
   }
@@ -238,7 +245,7 @@ export class PaneController {
       const doc = this.layerDoc(layer);
       doc.sources = { ...(doc.sources ?? {}), [id]: built.record as SourceRecord };
       const path = /^[a-z0-9][a-z0-9._-]*$/.test(id) ? `sources.${id}` : `sources[${JSON.stringify(id)}]`;
-      const r = await this.commit(layer, doc, path, `Saved source '${built.record.title}' (${id}) in the ${this.stores[layer].where} library.`);
+      const r = await this.commit(layer, doc, path, `Saved source '${built.record.title}' (${id}) in the ${layer} library.`);
       return r.ok ? { ...r, id } : r;
     });
   }
@@ -251,19 +258,19 @@ export class PaneController {
       if (kind === "source" || kind === "atomicWeight") {
         const section = kind === "source" ? "sources" : "atomicWeights";
         const map = { ...(doc[section] ?? {}) } as Record<string, unknown>;
-        if (!(id in map)) return { ok: false, message: `There is no ${kind} '${id}' in the ${this.stores[layer].where} library.`, issues: [], other: [] };
+        if (!(id in map)) return { ok: false, message: `There is no ${kind} '${id}' in the ${layer} library.`, issues: [], other: [] };
         delete map[id];
         (doc as unknown as Record<string, unknown>)[section] = map;
       } else {
         const list = (doc[SECTION[kind]] as { id: string; name: string }[] | undefined) ?? [];
         const found = list.find((r) => r.id === id);
-        if (!found) return { ok: false, message: `There is no ${kind} '${id}' in the ${this.stores[layer].where} library.`, issues: [], other: [] };
+        if (!found) return { ok: false, message: `There is no ${kind} '${id}' in the ${layer} library.`, issues: [], other: [] };
         name = found.name;
         (doc as unknown as Record<string, unknown>)[SECTION[kind]] = list.filter((r) => r.id !== id);
       }
       const below = this.library.get(id, kind)?.overrides ?? [];
       const after = below.length ? ` The ${below[0] === "builtin" ? "built-in" : below[0]} entry applies again.` : "";
-      const r = await this.commit(layer, doc, null, `Deleted '${name}' from the ${this.stores[layer].where} library.${after}`);
+      const r = await this.commit(layer, doc, null, `Deleted '${name}' from the ${layer} library.${after}`);
       if (!r.ok) return { ...r, message: `Not deleted: other entries still use it. ${r.other.join(" ")}`.trim() };
       return r;
     });
@@ -340,7 +347,7 @@ export class PaneController {
     const next = mode === "merge" ? mergeLibraryDocs(this.library.layers[layer], parsed.library) : clone(parsed.library);
     if (mode === "merge") next.name = this.library.layers[layer]?.name ?? LAYER_DOC_NAME[layer];
     const v = validateLibraryDoc(tidy(next), this.contextFor(layer));
-    if (!v.ok) return fail(`'${fileName}' was not imported (nothing changed): combined with the ${this.stores[layer].where} library it ${v.message}`, v.errors.map((e) => `${e.path || "(file)"}: ${e.message}`));
+    if (!v.ok) return fail(`'${fileName}' was not imported (nothing changed): combined with the ${layer} library it ${v.message}`, v.errors.map((e) => `${e.path || "(file)"}: ${e.message}`));
     this.pendingImport = { layer, mode, fileName, changes: describeImport(this.library, layer, parsed.library, mode), next };
     this.changed();
     return { ok: true, preview: this.pendingImport };
@@ -349,7 +356,7 @@ export class PaneController {
   async confirmImport(): Promise<ActionResult> {
     const p = this.pendingImport;
     if (!p) return { ok: false, message: "There is no import waiting for confirmation.", issues: [], other: [] };
-    const r = await this.serial(() => this.commit(p.layer, p.next, null, `Imported '${p.fileName}' into the ${this.stores[p.layer].where} library (${p.changes.length} change${p.changes.length === 1 ? "" : "s"}).`));
+    const r = await this.serial(() => this.commit(p.layer, p.next, null, `Imported '${p.fileName}' into the ${p.layer} library (${p.changes.length} change${p.changes.length === 1 ? "" : "s"}).`));
     this.pendingImport = null;
     this.changed();
     return r.ok ? r : { ...r, message: `Import not applied (nothing changed): ${r.message} ${r.other.join(" ")}`.trim() };
@@ -388,7 +395,7 @@ export class PaneController {
       setLayer(layer, null);
       this.changed();
       const after = store.afterChange ? await store.afterChange() : null;
-      return { ok: true, message: `The stored ${store.where} library was reset to empty.`, warnings: after ? [after] : [], notes: [] };
+      return { ok: true, message: `The stored ${layer} library was reset to empty.`, warnings: after ? [after] : [], notes: [] };
     });
   }
 

@@ -48,7 +48,7 @@ export function valueLine(label: string, v: ValueRecord, sources: (id: string) =
   const amount = v.unit === "1" ? String(v.value) : `${v.value} ${v.unit}`;
   let provenance = "";
   if (v.source) provenance = `${citation(sources(v.source), v.source)}${v.locator ? ` — ${v.locator}` : ""}`;
-  else if (v.status !== "published") provenance = STATUS_LABEL[v.status];
+  else if (v.status !== "published") provenance = "no published source";
   return {
     label,
     amount,

@@ -41,7 +41,7 @@ test("published values show unit, conditions and their source with the locator",
 
 test("common-practice and unverified values are flagged and say so", () => {
   const acetate = valuesOf(lib.get("acetate", "system")!, sources);
-  expect(acetate).toEqual([expect.objectContaining({ label: "pKa", amount: "4.8", statusText: "common practice", flagged: true, provenance: "common practice" })]);
+  expect(acetate).toEqual([expect.objectContaining({ label: "pKa", amount: "4.8", statusText: "common practice", flagged: true, provenance: "no published source" })]);
   const amine = valuesOf(lib.get("hb-amine", "system")!, sources);
   expect(amine.map((v) => [v.label, v.statusText, v.flagged])).toEqual([
     ["pKa", "from memory, unverified", true],

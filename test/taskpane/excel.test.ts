@@ -109,15 +109,17 @@ describe("workbook settings and recalculation", () => {
     expect(log.indexOf("calculate Full")).toBeGreaterThan(log.indexOf(`settings.delete ${WORKBOOK_LIBRARY_KEY}`));
   });
 
-  test("the workbook layer is loaded from the workbook's settings", async () => {
+  test("the workbook layer is loaded from the workbook's settings, then the workbook is recalculated with it", async () => {
     const first = fakeExcel();
     const ctl = excelController(first.excel);
     await ctl.init();
+    expect(first.log).not.toContain("calculate Full"); // nothing stored: nothing to recalculate
     await ctl.saveSystem("workbook", baseSystemByPkb("4.2"));
-    const { excel } = fakeExcel({ stored: first.settings.get(WORKBOOK_LIBRARY_KEY) });
+    const { excel, log } = fakeExcel({ stored: first.settings.get(WORKBOOK_LIBRARY_KEY) });
     const reopened = excelController(excel);
     await reopened.init();
     expect(getActiveLibrary().get("hb-7-amine", "system")?.layer).toBe("workbook");
+    expect(log).toEqual(["sync", "calculate Full", "sync"]);
   });
 
   test("a failed recalculation is reported as a warning with what to do", async () => {

@@ -116,7 +116,7 @@ function entry(page: Page, kind: string, id: string) {
 }
 
 async function chooseFile(page: Page, name: string, content: string | { path: string }, layer = "workbook", mode = "merge"): Promise<void> {
-  await tab(page, "Import / export");
+  await tab(page, "Files");
   await page.selectOption("#import-layer", layer);
   await page.selectOption("#import-mode", mode);
   if (typeof content === "string") await page.setInputFiles("#import-file", { name, mimeType: "application/json", buffer: Buffer.from(content) });
@@ -178,7 +178,7 @@ describe("task pane in Chromium with office.js from the npm copy", () => {
 
   test("adds a base by its pKb (conversion shown) and a substance form of it", async () => {
     expect(await tryPH(page, "HB-7 free base", "10 mM")).toMatch(/Unknown substance/);
-    await tab(page, "Add or edit");
+    await tab(page, "Add / edit");
     await page.getByLabel("Name", { exact: true }).fill("HB-7 amine");
     await page.getByLabel("Charge of the fully protonated form").fill("1");
     await page.fill('[data-path="steps[0].pKa.value"]', "4.2");
@@ -235,7 +235,7 @@ describe("task pane in Chromium with office.js from the npm copy", () => {
 
   test("an invalid save lists what is wrong at which field, and saves nothing", async () => {
     const before = await page.locator("#fingerprint").innerText();
-    await tab(page, "Add or edit");
+    await tab(page, "Add / edit");
     await page.getByLabel("Name", { exact: true }).fill("Broken");
     await page.getByLabel("Charge of the fully protonated form").fill("0.5");
     await page.fill('[data-path="steps[0].pKa.value"]', "abc");
@@ -272,7 +272,7 @@ describe("task pane in Chromium with office.js from the npm copy", () => {
   });
 
   test("exports the workbook library as a file", async () => {
-    await tab(page, "Import / export");
+    await tab(page, "Files");
     const [download] = await Promise.all([page.waitForEvent("download"), page.click("#export-workbook")]);
     expect(download.suggestedFilename()).toBe("protolyte-workbook-library.json");
     exported = fs.readFileSync((await download.path()) as string, "utf8");
@@ -322,7 +322,7 @@ describe("task pane in Chromium with office.js from the npm copy", () => {
 
   test("script-injection payloads in names render as inert text", async () => {
     // through the editor …
-    await tab(page, "Add or edit");
+    await tab(page, "Add / edit");
     await page.getByLabel("Name", { exact: true }).fill(XSS_IMG);
     await page.fill('[data-path="steps[0].pKa.value"]', "5");
     await page.selectOption('[data-path="steps[0].pKa.status"]', "unverified");
@@ -373,7 +373,7 @@ describe("task pane in Chromium with office.js from the npm copy", () => {
     await page.reload();
     await page.waitForSelector("body[data-ready=true]");
     const banner = page.locator('#problems [data-layer="workbook"]');
-    await waitForText(banner, /The stored browser page \(no workbook\) library is damaged/);
+    await waitForText(banner, /The stored workbook library \(browser page \(no workbook\)\) is damaged/);
     await waitForText(banner, /Nothing has been discarded/);
     // the workbook entries are out of effect, the personal ones still apply, the text is kept
     await search(page, "HB-7");
@@ -392,7 +392,7 @@ describe("task pane in Chromium with office.js from the npm copy", () => {
   test("tabs work from the keyboard", async () => {
     await page.getByRole("tab", { name: "Browse" }).focus();
     await page.keyboard.press("ArrowRight");
-    expect(await focused(page.getByRole("tab", { name: "Add or edit" }))).toBe(true);
+    expect(await focused(page.getByRole("tab", { name: "Add / edit" }))).toBe(true);
     expect(await page.locator("#panel-edit").isVisible()).toBe(true);
     await page.keyboard.press("End");
     expect(await attr(page.getByRole("tab", { name: "About" }), "aria-selected")).toBe("true");
@@ -419,7 +419,7 @@ describe("task pane when office.js cannot load at all", () => {
       // 0.1 M acetic acid, pKa 4.756: pH ≈ 2.88
       expect(pH).toBeGreaterThan(2.8);
       expect(pH).toBeLessThan(2.95);
-      await tab(page, "Add or edit");
+      await tab(page, "Add / edit");
       await page.getByLabel("Name", { exact: true }).fill("Halvorsen offline acid");
       await page.fill('[data-path="steps[0].pKa.value"]', "3.5");
       await page.selectOption('[data-path="steps[0].pKa.status"]', "common-practice");

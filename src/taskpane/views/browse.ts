@@ -183,12 +183,14 @@ export class BrowseView {
         const confirmBox = el(
           "div",
           { class: "msg warn", role: "group", "aria-label": "Confirm delete" },
-          el("p", {}, `Delete '${name}' from the ${this.ctl.stores[layer].where} library?${entry.overrides.length ? " The entry it overrides applies again." : ""}`),
+          el("p", {}, `Delete '${name}' from the ${layer} library?${entry.overrides.length ? " The entry it overrides applies again." : ""}`),
         );
         const yes = button("Delete", async () => {
           const r = await this.ctl.deleteEntry(layer, entry.kind, entry.id);
           this.hooks.status(resultMessage(r));
           announce(r.message);
+          // the entry's row is gone after a delete: keep the keyboard in the list's search box
+          if (r.ok) document.getElementById("search")?.focus();
         }, { class: "danger" });
         const no = button("Keep", () => {
           confirmBox.remove();

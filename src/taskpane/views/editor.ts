@@ -90,19 +90,19 @@ export class EditorView {
     }
     if (!editing) {
       const layer = select<UserLayer>(d.layer, [
-        ["workbook", `Workbook library (${this.ctl.stores.workbook.where})`],
-        ["personal", `Personal library (${this.ctl.stores.personal.where})`],
+        ["workbook", "Workbook library"],
+        ["personal", "Personal library"],
       ], (v) => {
         this.targetLayer = v;
         this.draft.layer = v;
       });
       layer.id = "target-layer";
-      top.push(field("Save into", layer, { hint: "The workbook library travels with the workbook; the personal library stays on this computer." }).wrap);
+      top.push(field("Save into", layer, { hint: `The workbook library (${this.ctl.stores.workbook.where}) travels with the workbook; the personal library (${this.ctl.stores.personal.where}) stays on this computer.` }).wrap);
     } else {
       const over = this.ctl.library.get(d.originalId as string, d.kind);
       const note = inLayer
-        ? `Saved in the ${this.ctl.stores[d.layer].where} library.${over && over.overrides.length ? " It overrides a built-in entry; deleting it reveals the built-in one again." : ""}`
-        : `Saving creates a copy in the ${this.ctl.stores[d.layer].where} library that overrides the built-in entry '${this.nameOf(d)}'. The built-in entry stays unchanged.`;
+        ? `Saved in the ${d.layer} library (${this.ctl.stores[d.layer].where}).${over && over.overrides.length ? " It overrides a built-in entry; deleting it reveals the built-in one again." : ""}`
+        : `Saving creates a copy in the ${d.layer} library (${this.ctl.stores[d.layer].where}) that overrides the built-in entry '${this.nameOf(d)}'. The built-in entry stays unchanged.`;
       top.push(message("ok", note));
     }
     const body = d.kind === "system" ? this.systemFields(d.input) : d.kind === "substance" ? this.substanceFields(d.input) : this.sourceFields(d.input, editing);
@@ -145,7 +145,8 @@ export class EditorView {
       el("div", { class: "row" }, field("Value", textInput(v.value, (x) => (v.value = x), { inputmode: "decimal" }), { path: `${path}.value` }).wrap, field("Conditions", textInput(v.conditions, (x) => (v.conditions = x)), { path: `${path}.conditions` }).wrap),
       extra ?? null,
       el("div", { class: "row" }, field("Status", status, { path: `${path}.status` }).wrap, field("Source", source, { path: `${path}.source` }).wrap),
-      el("div", { class: "row" }, field("Where in the source", textInput(v.locator, (x) => (v.locator = x), { placeholder: "Table 2" }), { path: `${path}.locator` }).wrap, field("Note", textInput(v.note, (x) => (v.note = x)), { path: `${path}.note`, hint: "Required for common practice or unverified values: why." }).wrap),
+      el("div", { class: "row" }, field("Where in the source", textInput(v.locator, (x) => (v.locator = x), { placeholder: "Table 2" }), { path: `${path}.locator` }).wrap, field("Note", textInput(v.note, (x) => (v.note = x)), { path: `${path}.note` }).wrap),
+      el("p", { class: "hint" }, "A published value names its source; a common-practice or unverified one says why in the note."),
     );
   }
 
@@ -183,7 +184,7 @@ export class EditorView {
       s.enteredAsPkb = pkb.checked;
       showConversion();
     });
-    const pkbRow = el("div", { class: "field" }, pkb, el("label", { for: pkb.id }, " The value is the pKb of the base (25 °C)"), conversion);
+    const pkbRow = el("div", {}, el("div", { class: "check" }, pkb, el("label", { for: pkb.id }, "The value is the pKb of the base (25 °C)")), conversion);
     const pKa = this.valueFields(s.pKa, `${p}.pKa`, "pKa at 25 °C, I = 0 (or pKb)", pkbRow);
     pKa.querySelector<HTMLInputElement>(`[data-path="${p}.pKa.value"]`)?.addEventListener("input", showConversion);
     showConversion();
@@ -238,7 +239,7 @@ export class EditorView {
       this.idField(input, editing),
       field("Other names (one per line)", textArea(input.aliases, (v) => (input.aliases = v)), { path: "aliases" }).wrap,
       field("Formula of the form weighed", textInput(input.formula, (v) => (input.formula = v), { placeholder: "Na2HPO4·7H2O" }), { path: "formula", hint: "Hydrate water included; the molar mass is computed from it." }).wrap,
-      el("div", { class: "field" }, aliasCheck, el("label", { for: "formula-alias" }, " The formula is also a name to look it up by")),
+      el("div", { class: "check" }, aliasCheck, el("label", { for: "formula-alias" }, "The formula is also a name to look it up by")),
       el("details", { open: input.formula === "" || input.molarMass.value !== "" }, el("summary", {}, "Molar mass (when there is no formula)"), this.valueFields(input.molarMass, "molarMass", "Molar mass, g/mol")),
       el("div", { class: "row" }, field("Kind", select(input.nature, NATURES, (v) => (input.nature = v)), { path: "nature" }).wrap, field("State", select(input.state, STATES, (v) => (input.state = v)), { path: "state" }).wrap),
       el("fieldset", {}, el("legend", {}, "Acid–base systems it releases"), el("p", { class: "hint" }, "Dissociable H⁺ carried: protons the weighed form still holds on the system (Na₂HPO₄: 1 of 3; a free base: 0)."), ...sysRows, el("div", { class: "actions" }, button("Add a system", () => {

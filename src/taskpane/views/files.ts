@@ -29,15 +29,15 @@ export class FilesView {
   render(): void {
     const exports = (["workbook", "personal"] as const).map((layer) => {
       const empty = !this.ctl.library.layers[layer];
-      return button(`Export the ${layer} library`, () => this.export(layer), { id: `export-${layer}`, disabled: empty, "aria-describedby": "export-note" });
+      return button(`Export the ${layer} library${empty ? " (empty)" : ""}`, () => this.export(layer), { id: `export-${layer}`, disabled: empty, "aria-describedby": "export-note" });
     });
     const layer = select<UserLayer>(this.layer, [
-      ["workbook", `Workbook library (${this.ctl.stores.workbook.where})`],
-      ["personal", `Personal library (${this.ctl.stores.personal.where})`],
+      ["workbook", "Workbook library"],
+      ["personal", "Personal library"],
     ], (v) => (this.layer = v));
     layer.id = "import-layer";
     const mode = select<ImportMode>(this.mode, [
-      ["merge", "Add to it (entries with the same id are replaced)"],
+      ["merge", "Add to it (same ids replaced)"],
       ["replace", "Replace it with the file"],
     ], (v) => (this.mode = v));
     mode.id = "import-mode";
@@ -48,7 +48,7 @@ export class FilesView {
       el("div", { class: "actions" }, ...exports, button("Export everything in effect", () => this.export("effective"), { id: "export-effective" })),
       this.exportNote,
       el("h2", {}, "Import"),
-      field("Import into", layer).wrap,
+      field("Import into", layer, { hint: `Workbook library: ${this.ctl.stores.workbook.where}. Personal library: ${this.ctl.stores.personal.where}.` }).wrap,
       field("How", mode).wrap,
       field("Library file", this.file, { hint: `A Protolyte library file (.json), at most ${(MAX_LIBRARY_BYTES / 1048576).toFixed(0)} MB. You will see what it changes before anything is applied.` }).wrap,
       this.outcome,

@@ -34,7 +34,7 @@ export function renderProblems(ctl: PaneController, status: (node: HTMLElement) 
       const confirm = el(
         "div",
         { class: "msg error", role: "group", "aria-label": "Confirm reset" },
-        el("p", {}, `Reset discards the stored ${ctl.stores[layer].where} library for good${raw ? " (export its text first if you may need it)" : ""}. Reset now?`),
+        el("p", {}, `Reset discards the stored ${layer} library (${ctl.stores[layer].where}) for good${raw ? " (export its text first if you may need it)" : ""}. Reset now?`),
       );
       const yes = button("Reset and discard", async () => {
         const r = await ctl.resetLayer(layer);
