@@ -14,24 +14,13 @@ export const DIST = path.join(ROOT, "dist");
 export const OFFICE_CDN = "https://appsforoffice.microsoft.com/lib/1/hosted/";
 const OFFICE_NPM = path.join(ROOT, "node_modules/@microsoft/office-js/dist");
 
-function newestMtime(dir: string): number {
-  let newest = 0;
-  for (const f of fs.readdirSync(dir, { withFileTypes: true })) {
-    const p = path.join(dir, f.name);
-    newest = Math.max(newest, f.isDirectory() ? newestMtime(p) : fs.statSync(p).mtimeMs);
-  }
-  return newest;
-}
-
 /**
- * Build dist/ (`npx webpack --mode production`) when it is missing, or older than the task pane's
- * sources (`npm test` always builds first; this covers `npx jest test/taskpane` after an edit).
+ * Build dist/ (`npx webpack --mode production`) when it is missing. `npm test` builds before jest;
+ * after editing the pane, rebuild before `npx jest test/taskpane` (webpack leaves unchanged files
+ * untouched, so file times cannot tell a stale build reliably).
  */
 export function ensureBuilt(): void {
-  const html = path.join(DIST, "taskpane.html");
-  const js = path.join(DIST, "taskpane.js");
-  const fresh = fs.existsSync(html) && fs.existsSync(js) && fs.statSync(js).mtimeMs >= newestMtime(path.join(ROOT, "src/taskpane"));
-  if (fresh) return;
+  if (fs.existsSync(path.join(DIST, "taskpane.html")) && fs.existsSync(path.join(DIST, "taskpane.js"))) return;
   execSync("npx webpack --mode production --stats errors-only", { cwd: ROOT, stdio: "pipe", timeout: 240000 });
 }
 
