@@ -111,3 +111,23 @@ describe("built-in entries", () => {
     expect(getActiveLibrary().get("hb-7-amine", "system")?.layer).toBe("workbook");
   });
 });
+
+describe("duplicating a user entry", () => {
+  test("a substance copy gets its own id and name, and its formula is not a second lookup name", async () => {
+    const { ctl } = await freshController();
+    await ctl.saveSystem("workbook", baseSystemByPkb("4.2"));
+    const sub = baseSubstance("hb-7-amine");
+    sub.formula = "C8H11NO";
+    sub.molarMass = { value: "", conditions: "as weighed", status: "published", source: "", locator: "", note: "" };
+    expect((await ctl.saveSubstance("workbook", sub)).ok).toBe(true);
+    const draft = ctl.duplicateDraft("substance", "hb-7-free-base");
+    expect(draft).toMatchObject({ kind: "substance", layer: "workbook", originalId: null, overrides: false });
+    if (draft?.kind !== "substance") return;
+    expect(draft.input).toMatchObject({ name: "HB-7 free base (copy)", id: "hb-7-free-base-copy", aliases: "", formula: "C8H11NO", formulaAlias: false });
+    const r = await ctl.saveSubstance(draft.layer, draft.input, draft.originalId);
+    expect(r).toMatchObject({ ok: true, id: "hb-7-free-base-copy", warnings: [] });
+    // the original keeps its names
+    const found = ctl.library.resolve("C8H11NO");
+    expect(found.ok && found.entry.id).toBe("hb-7-free-base");
+  });
+});

@@ -128,3 +128,18 @@ describe("a failed import changes nothing", () => {
     await expectUnchanged(file({ format: LIBRARY_FORMAT, schemaVersion: 9, name: "x" }), 60, /newer/);
   });
 });
+
+describe("import preview across layers", () => {
+  test("an entry imported into the workbook while the personal library overrides it is said to stay hidden", async () => {
+    const { ctl } = await freshController();
+    const ion = { id: "hb-cation", name: "Halvorsen test cation", charge: 1 };
+    const personal = file({ format: LIBRARY_FORMAT, schemaVersion: 1, name: "p", ions: [ion] });
+    await ctl.previewImport("personal", "p.json", personal.length, read(personal));
+    expect((await ctl.confirmImport()).ok).toBe(true);
+    const workbook = file({ format: LIBRARY_FORMAT, schemaVersion: 1, name: "w", ions: [{ ...ion, name: "workbook cation" }] });
+    const p = await ctl.previewImport("workbook", "w.json", workbook.length, read(workbook));
+    expect(p.ok && p.preview.changes).toEqual([
+      expect.objectContaining({ id: "hb-cation", action: "hidden", text: "adds a new strong ion, but your personal strong ion stays in effect" }),
+    ]);
+  });
+});
