@@ -1,7 +1,10 @@
 /**
  * Defects found by the robustness campaign, each pinned by the smallest case that showed it.
  */
+import { spawnSync } from "node:child_process";
+import { join } from "node:path";
 import { parseQuantity } from "../../src/chem";
+import { goldenMax } from "../../src/chem/workflows/golden";
 import * as AQ from "../../src/functions/functions";
 import { resetActiveLibrary } from "../../src/library";
 import { outcomeOf, outcomeProblem } from "./outcome";
@@ -61,5 +64,39 @@ describe("AQ.PKA refuses an ionic strength no solution has", () => {
   test("I = 20 mol/L and below still give a number", () => {
     expect(Number.isFinite(AQ.PKA("phosphate", 2, 25, 20))).toBe(true);
     expect(AQ.PKA("phosphate", 2, 25, 0)).toBeCloseTo(7.198, 3);
+  });
+});
+
+describe("AQ.PHRANGE with tiny tolerances ends", () => {
+  // goldenMax looped forever when the tolerance interval was so narrow (±1e-12 around a pKa of
+  // 7.2) that 1e-7 of its width fell below the spacing of doubles: Excel would stay at #BUSY!.
+  test("goldenMax on an interval a few ulps wide stops after a bounded number of evaluations", () => {
+    let calls = 0;
+    const f = (x: number) => {
+      if (++calls > 10_000) throw new Error("goldenMax does not stop");
+      return { ok: true as const, value: -((x - 7.2) ** 2) };
+    };
+    const lo = 7.2 - 1e-12;
+    const hi = 7.2 + 1e-12;
+    const best = goldenMax(f, lo, hi, f(lo).value, f(hi).value, 1e-7 * (hi - lo));
+    expect("x" in best && best.x >= lo && best.x <= hi).toBe(true);
+    expect(calls).toBeLessThan(200);
+  });
+
+  test("the case the fuzzer found returns a band (in a child process, so a hang fails instead of stalling jest)", () => {
+    const root = join(__dirname, "..", "..");
+    const script = [
+      'require("./src/functions/runtime-shim");',
+      'const AQ = require("./src/functions/functions");',
+      'const r = AQ.PHRANGE([["KH2PO4"],["Tris HCl"]], [[2.0e-7],[3.4e-4]], 1e-12, 1e-12, 25);',
+      "process.stdout.write(JSON.stringify(r));",
+    ].join("\n");
+    const r = spawnSync(join(root, "node_modules", ".bin", "tsx"), ["-e", script], { cwd: root, encoding: "utf8", timeout: 30_000 });
+    expect({ signal: r.signal, status: r.status, stderr: r.stderr }).toEqual({ signal: null, status: 0, stderr: "" });
+    const table = JSON.parse(r.stdout) as unknown[][];
+    expect(table[0]).toEqual(["low pH", "high pH", "method"]);
+    const [low, high] = table[1] as number[];
+    expect(high - low).toBeGreaterThanOrEqual(0);
+    expect(high - low).toBeLessThan(1e-6);
   });
 });

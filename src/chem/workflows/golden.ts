@@ -9,6 +9,8 @@ import type { Evaluation } from "./brent";
 import type { Failure } from "../types";
 
 const INV_PHI = (Math.sqrt(5) - 1) / 2;
+/** 0.618^200 ≈ 1e-42: far more than any bracket of doubles needs. */
+const MAX_ITERATIONS = 200;
 
 export interface Best {
   x: number;
@@ -33,7 +35,10 @@ export function goldenMax(f: (x: number) => Evaluation, a: number, b: number, fa
   };
   keep(x1, f1);
   keep(x2, f2);
-  while (hi - lo > xtol) {
+  // The bracket cannot shrink below the spacing of doubles at its ends: a smaller xtol (a tolerance
+  // interval of 1e-12 around a pKa of 7) would loop forever. The cap is a second guard.
+  const tol = Math.max(xtol, 4 * Number.EPSILON * Math.max(Math.abs(a), Math.abs(b)));
+  for (let it = 0; hi - lo > tol && it < MAX_ITERATIONS; it++) {
     if (f1 >= f2) {
       hi = x2;
       x2 = x1;
