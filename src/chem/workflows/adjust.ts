@@ -20,7 +20,7 @@ import { prepare } from "../prepared";
 import type { ChemOptions, Component, Mixture, Result } from "../types";
 import { resolveOptions } from "../validate-options";
 import { firstCrossing, geometricGrid } from "./crossing";
-import { maxAddable, mixedWithStock, pHOffset, withAdded } from "./mixing";
+import { compact, maxAddable, mixedWithStock, pHOffset, withAdded } from "./mixing";
 import { unreachable } from "./unreachable";
 import { checkPositive, checkTargetPH, checkTitrant } from "./validate";
 
@@ -79,7 +79,8 @@ export function adjust(mix: Mixture, titrant: Component, targetPH: number, opts:
   if (bad) return bad;
   const prepared = prepare(mix);
   if (!prepared.ok) return prepared;
-  return opts.stock === undefined ? adjustPerLitre(mix, titrant, targetPH, chem) : adjustWithStock(mix, titrant, targetPH, opts.stock, chem);
+  const one = compact(mix);
+  return opts.stock === undefined ? adjustPerLitre(one, titrant, targetPH, chem) : adjustWithStock(one, titrant, targetPH, opts.stock, chem);
 }
 
 function adjustPerLitre(mix: Mixture, titrant: Component, target: number, chem: ChemOptions): AdjustResult {

@@ -12,7 +12,7 @@ import { prepare } from "../prepared";
 import type { ChemOptions, Component, Failure, Mixture, Result } from "../types";
 import { resolveOptions } from "../validate-options";
 import { equivalencePoints, type EquivalencePoint } from "./equivalence";
-import { maxAddable, mixedWithStock, pHOf } from "./mixing";
+import { compact, maxAddable, mixedWithStock, pHOf } from "./mixing";
 import { checkPositive, checkTitrant } from "./validate";
 
 export interface CurveRequest {
@@ -63,8 +63,11 @@ export function curve(mix: Mixture, titrant: Component, req: CurveRequest, opts:
   if (req.stockConc > most) {
     return fail("out-of-range", `A ${titrant.name} stock at ${req.stockConc} mol/L is above the ${most.toPrecision(3)} mol/L the engine accepts.`);
   }
+  const valid = prepare(mix);
+  if (!valid.ok) return valid;
+  const one = compact(mix);
   const { stockConc, volume, maxVolume } = req;
-  const at = (v: number) => mixedWithStock(mix, titrant, stockConc, v / (volume + v));
+  const at = (v: number) => mixedWithStock(one, titrant, stockConc, v / (volume + v));
   const pHAt = (v: number) => pHOf(at(v), chem);
   const vs: number[] = [];
   const pHs: number[] = [];

@@ -7,6 +7,40 @@ import { prepare } from "../prepared";
 import type { ChemOptions, Component, Mixture, PHResult } from "../types";
 import type { Evaluation } from "./brent";
 
+/** Key of a component for merging: the same object, or the same id with the same content. */
+function sameComponent(a: Component, b: Component): boolean {
+  return a === b || (a.id === b.id && JSON.stringify(a) === JSON.stringify(b));
+}
+
+/**
+ * Groups the entries of a mixture by component (first appearance order): the engine adds entries
+ * of the same component up anyway, so solving the groups gives the same equilibrium, with one entry
+ * per substance however long the list typed in a sheet. `groupOf[i]` is the group of entry i.
+ */
+export function groupEntries(mix: Mixture): { components: Component[]; groupOf: number[] } {
+  const components: Component[] = [];
+  const byId = new Map<string, number[]>();
+  const groupOf = mix.map((e) => {
+    const candidates = byId.get(e.component.id) ?? [];
+    const found = candidates.find((g) => sameComponent(components[g], e.component));
+    if (found !== undefined) return found;
+    components.push(e.component);
+    candidates.push(components.length - 1);
+    byId.set(e.component.id, candidates);
+    return components.length - 1;
+  });
+  return { components, groupOf };
+}
+
+/** One entry per component, concentrations added (call after validating the original mixture). */
+export function compact(mix: Mixture): Mixture {
+  const { components, groupOf } = groupEntries(mix);
+  if (components.length === mix.length) return mix;
+  const conc = components.map(() => 0);
+  mix.forEach((e, i) => (conc[groupOf[i]] += e.conc));
+  return components.map((component, g) => ({ component, conc: conc[g] }));
+}
+
 /** The mixture with `conc` mol/L of `titrant` added, volume unchanged. */
 export function withAdded(mix: Mixture, titrant: Component, conc: number): Mixture {
   return conc === 0 ? mix : [...mix, { component: titrant, conc }];

@@ -1,8 +1,10 @@
 /**
  * The quantities PHRANGE varies and the mixture at a point of the tolerance box.
  *
- * Quantities: each mixture entry with a positive amount and a positive relative tolerance t
- * (interval conc·[1 − t, 1 + t]); with a pKa uncertainty u > 0, each pKa step of each system present
+ * Quantities: each component with a positive amount and a positive tolerance (entries of the same
+ * component are merged first: the engine only sees their sum, and the sums reachable from
+ * independent tolerances c_i·[1 − t_i, 1 + t_i] fill exactly [Σ c_i(1 − t_i), Σ c_i(1 + t_i)], so the
+ * merge loses nothing); with a pKa uncertainty u > 0, each pKa step of each system present
  * at a positive total (interval pKa ± u). Every pKa varies independently. Systems are matched by id:
  * components carrying the same system all see the same shifted constants.
  */
@@ -23,12 +25,12 @@ export interface Quantity {
   step?: number;
 }
 
-export function quantitiesOf(mix: Mixture, tolerances: readonly number[], pKaUncertainty: number): Quantity[] {
+/** Quantities of a mixture whose entry i may range over [lo[i], hi[i]] (entries are distinct components). */
+export function quantitiesOf(mix: Mixture, lo: readonly number[], hi: readonly number[], pKaUncertainty: number): Quantity[] {
   const out: Quantity[] = [];
   mix.forEach((e, i) => {
-    const t = tolerances[i];
-    if (e.conc > 0 && t > 0) {
-      out.push({ kind: "amount", label: `${e.component.name} (mol/L)`, nominal: e.conc, lo: e.conc * (1 - t), hi: e.conc * (1 + t), entry: i });
+    if (e.conc > 0 && hi[i] > lo[i]) {
+      out.push({ kind: "amount", label: `${e.component.name} (mol/L)`, nominal: e.conc, lo: lo[i], hi: hi[i], entry: i });
     }
   });
   if (pKaUncertainty > 0) {

@@ -3,8 +3,9 @@
  * entry) and, optionally, ± an uncertainty on every pKa.
  *
  * Method (worst case, not a statistical interval):
- * - The varied quantities are the k amounts with a positive tolerance and, with u > 0, every pKa
- *   step of every system present (ph-range-model.ts).
+ * - The varied quantities are the k amounts with a positive tolerance (entries of the same
+ *   component merged, exactly) and, with u > 0, every pKa step of every system present
+ *   (ph-range-model.ts); at most PHRANGE_MAX_QUANTITIES (64), else "out-of-range".
  * - pH is monotone in each quantity only in some cases: in a strong-ion amount and in a pKa with
  *   ideal activity (the charge balance is monotone in both), but not in general — an amount also
  *   changes the ionic strength, and with an activity model the pH can have an interior extremum in
@@ -27,6 +28,7 @@ import { fail } from "../failure";
 import type { ChemOptions, Mixture, Result } from "../types";
 import { resolveOptions } from "../validate-options";
 import { prepare } from "../prepared";
+import { groupEntries } from "./mixing";
 import { BoxPH, quantitiesOf, type Quantity } from "./ph-range-model";
 import { allCorners, flipCorners, refineCoordinates, type BoxPoint } from "./ph-range-search";
 
@@ -45,7 +47,9 @@ export interface PHRangeValue {
   method: "corners" | "local-search" | "none";
   /** True when all 2^k corners were evaluated. */
   exhaustive: boolean;
-  /** The quantities varied, in the order of the points' values. */
+  /** The mixture searched: one entry per distinct component (entries of the same one merged). */
+  mixture: Mixture;
+  /** The quantities varied (entry indices into `mixture`), in the order of the points' values. */
   quantities: Quantity[];
   lowAt: BoxPoint;
   highAt: BoxPoint;
@@ -56,6 +60,8 @@ export interface PHRangeValue {
 export type PHRangeResult = Result<PHRangeValue>;
 
 export const PHRANGE_MAX_EXHAUSTIVE = 12;
+/** Most quantities the search takes on (the local search costs about 40·k² pH evaluations). */
+export const PHRANGE_MAX_QUANTITIES = 64;
 const MAX_EXHAUSTIVE_LIMIT = 16;
 const MAX_PKA_UNCERTAINTY = 2;
 
@@ -114,15 +120,32 @@ export function phRange(mix: Mixture, tolerances: number | readonly number[], op
   const tol = checkInputs(mix, tolerances, opts);
   if (!Array.isArray(tol)) return tol;
   const chem: ChemOptions = { temperatureC: o.temperatureC, activity: o.activity };
-  const qs = quantitiesOf(mix, tol, opts.pKaUncertainty ?? 0);
-  const box = new BoxPH(mix, qs, chem);
+  const { components, groupOf } = groupEntries(mix);
+  const nominalConc = components.map(() => 0);
+  const lo = components.map(() => 0);
+  const hi = components.map(() => 0);
+  mix.forEach((e, i) => {
+    const g = groupOf[i];
+    nominalConc[g] += e.conc;
+    lo[g] += e.conc * (1 - tol[i]);
+    hi[g] += e.conc * (1 + tol[i]);
+  });
+  const merged: Mixture = components.map((component, g) => ({ component, conc: nominalConc[g] }));
+  const qs = quantitiesOf(merged, lo, hi, opts.pKaUncertainty ?? 0);
+  if (qs.length > PHRANGE_MAX_QUANTITIES) {
+    return fail(
+      "out-of-range",
+      `${qs.length} quantities vary (amounts of distinct substances and pKa steps): the worst-case search handles at most ${PHRANGE_MAX_QUANTITIES}. Give tolerances only to the amounts that vary, or leave out the pKa uncertainty.`,
+    );
+  }
+  const box = new BoxPH(merged, qs, chem);
   const nom = box.at(box.nominal);
   if (!nom.ok) return nom;
   const nominalPoint = { values: box.nominal, pH: nom.value };
   const lin = linearise(box, nom.value);
   if (!("signs" in lin)) return lin;
   if (qs.length === 0) {
-    return { ok: true, low: nom.value, high: nom.value, nominal: nom.value, method: "none", exhaustive: true, quantities: qs, lowAt: nominalPoint, highAt: nominalPoint, linear: { low: lin.low, high: lin.high }, evaluations: box.evaluations };
+    return { ok: true, low: nom.value, high: nom.value, nominal: nom.value, method: "none", exhaustive: true, mixture: merged, quantities: qs, lowAt: nominalPoint, highAt: nominalPoint, linear: { low: lin.low, high: lin.high }, evaluations: box.evaluations };
   }
   const exhaustive = qs.length <= (opts.maxExhaustive ?? PHRANGE_MAX_EXHAUSTIVE);
   let lowStart: BoxPoint;
@@ -158,6 +181,7 @@ export function phRange(mix: Mixture, tolerances: number | readonly number[], op
     nominal: nom.value,
     method: exhaustive ? "corners" : "local-search",
     exhaustive,
+    mixture: merged,
     quantities: qs,
     lowAt: low.pH <= nom.value ? low : nominalPoint,
     highAt: high.pH >= nom.value ? high : nominalPoint,

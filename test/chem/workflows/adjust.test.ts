@@ -75,6 +75,13 @@ describe("adjust: the answer fed back reproduces the target", () => {
     expect(r.value).toBeGreaterThan(0);
   });
 
+  test("a mixture typed with the same substance in several entries gives the same answer as merged", () => {
+    const split = f.mixture([f.aceticAcid, 0.02], [f.sodiumAcetate, 0.05], [f.aceticAcid, 0.03]);
+    const a = f.ok(adjust(split, f.NaOH, 5.0, { stock: { conc: 1, volume: 800 } })).value;
+    const b = f.ok(adjust(acetateBuffer, f.NaOH, 5.0, { stock: { conc: 1, volume: 800 } })).value;
+    f.expectRel(a, b, 1e-12, "split vs merged acetate batch");
+  });
+
   test("a target equal to the current pH gives exactly 0", () => {
     const now = f.pH(acetateBuffer);
     expect(f.ok(adjust(acetateBuffer, f.NaOH, now)).value).toBe(0);

@@ -25,8 +25,8 @@ describe("pHRange: the band", () => {
     { label: "acetate + Tris + HCl ±10 %", mix: acetateTris, tol: 0.1, u: 0 },
   ])("$label: the end points reproduce the band and the nominal pH lies inside", ({ label, mix, tol, u }) => {
     const r = f.ok(phRange(mix, tol, { pKaUncertainty: u }));
-    f.expectAbs(f.pH(mixtureAt(mix, r.quantities, r.lowAt.values)), r.low, 1e-12, `${label}: pH at lowAt`);
-    f.expectAbs(f.pH(mixtureAt(mix, r.quantities, r.highAt.values)), r.high, 1e-12, `${label}: pH at highAt`);
+    f.expectAbs(f.pH(mixtureAt(r.mixture, r.quantities, r.lowAt.values)), r.low, 1e-12, `${label}: pH at lowAt`);
+    f.expectAbs(f.pH(mixtureAt(r.mixture, r.quantities, r.highAt.values)), r.high, 1e-12, `${label}: pH at highAt`);
     f.expectAbs(r.nominal, f.pH(mix), 1e-12, `${label}: nominal`);
     expect(r.low).toBeLessThanOrEqual(r.nominal);
     expect(r.high).toBeGreaterThanOrEqual(r.nominal);
@@ -39,7 +39,7 @@ describe("pHRange: the band", () => {
     const r = f.ok(phRange(mix, [0.1, 0.05, 0.2, 0.1], { pKaUncertainty: 0.02 }));
     fc.assert(
       fc.property(fc.array(fc.double({ min: 0, max: 1, noNaN: true }), { minLength: r.quantities.length, maxLength: r.quantities.length }), (u) => {
-        const p = f.pH(mixtureAt(mix, r.quantities, pointInBox(r, u)));
+        const p = f.pH(mixtureAt(r.mixture, r.quantities, pointInBox(r, u)));
         if (!(p >= r.low - 1e-12 && p <= r.high + 1e-12)) throw new Error(`point ${u}: pH ${p} outside [${r.low}, ${r.high}]`);
       }),
       { numRuns: 300 },
@@ -52,7 +52,7 @@ describe("pHRange: the band", () => {
     let hi = -Infinity;
     for (let i = 0; i <= 40; i++) {
       for (let j = 0; j <= 40; j++) {
-        const p = f.pH(mixtureAt(phosphate, r.quantities, pointInBox(r, [i / 40, j / 40])));
+        const p = f.pH(mixtureAt(r.mixture, r.quantities, pointInBox(r, [i / 40, j / 40])));
         lo = Math.min(lo, p);
         hi = Math.max(hi, p);
       }
@@ -127,6 +127,30 @@ describe("pHRange: beyond the exhaustive limit", () => {
     expect(full.exhaustive).toBe(true);
     f.expectAbs(fallback.low, full.low, 1e-9, "local-search low vs all corners");
     f.expectAbs(fallback.high, full.high, 1e-9, "local-search high vs all corners");
+  });
+});
+
+describe("pHRange: entries of the same substance", () => {
+  // The engine sees only the sum of two entries of one component; the sums reachable from
+  // independent tolerances fill [Σ c(1 − t), Σ c(1 + t)] exactly, so splitting an amount in two
+  // entries must give the band of the merged entry: Na₂HPO₄ 0.010 ± 2 % + 0.015 ± 4 % is
+  // 0.025 mol/L from 0.0242 to 0.0258, i.e. ± 3.2 %.
+  test("two entries of one component give the band of their merged entry", () => {
+    const split = f.ok(phRange(f.mixture([f.KH2PO4, 0.025], [f.Na2HPO4, 0.01], [f.Na2HPO4, 0.015]), [0.05, 0.02, 0.04]));
+    const merged = f.ok(phRange(f.mixture([f.KH2PO4, 0.025], [f.Na2HPO4, 0.025]), [0.05, 0.032]));
+    expect(split.mixture.length).toBe(2);
+    f.expectAbs(split.low, merged.low, 1e-12, "split vs merged, low");
+    f.expectAbs(split.high, merged.high, 1e-12, "split vs merged, high");
+  });
+
+  test("more than 64 varied quantities → out-of-range", () => {
+    const many = Array.from({ length: 70 }, (_, i) => ({
+      component: { id: `salt ${i}`, name: `salt ${i}`, systems: [], ions: [{ ion: { id: `ion ${i}`, name: `ion ${i}`, charge: i % 2 === 0 ? 1 : -1 }, stoich: 1 }] },
+      conc: 0.001,
+    }));
+    const r = phRange([...phosphate, ...many], 0.01);
+    expect(r.ok ? "ok" : r.code).toBe("out-of-range");
+    if (!r.ok) expect(r.message).toContain("at most 64");
   });
 });
 
