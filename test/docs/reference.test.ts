@@ -107,6 +107,15 @@ describe.each(pageFiles().map((f) => [f]))("%s", (file) => {
     expect(page.argumentNames).toEqual(expected.map((p) => p.name));
   });
 
+  test("every parameter named in the text (in `backticks`) is one of this function's parameters", () => {
+    const meta = byId(id);
+    if (meta === undefined) return;
+    const all = new Set(functions.flatMap((f) => f.parameters.map((p) => p.name)));
+    const own = new Set(meta.parameters.map((p) => p.name));
+    const named = [...page.lines.join("\n").matchAll(/`([A-Za-z_]+)`/g)].map((m) => m[1]);
+    expect(named.filter((w) => all.has(w) && !own.has(w))).toEqual([]);
+  });
+
   test("every AQ function mentioned exists", () => {
     const unknown = functionsMentioned(page.lines.join("\n")).filter((f) => byId(f) === undefined && !(f in PENDING));
     expect(unknown).toEqual([]);
