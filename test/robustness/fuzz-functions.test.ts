@@ -1,0 +1,103 @@
+/**
+ * Fuzzing every AQ function as Excel calls it: the exported function objects (through the catalogue,
+ * so functions added to it are fuzzed too) with random and hostile arguments. Property: each call
+ * returns a finite number, a string, or a well-formed matrix of those, or throws a
+ * CustomFunctions.Error #VALUE!/#N/A with a one-line message of at most 250 characters; it never
+ * mutates its arguments, and a value is the same when asked again (the mixture cache).
+ *
+ * Fixed seed (arbitraries.ts); a longer campaign: PROTOLYTE_FUZZ_RUNS=50 npx jest test/robustness
+ */
+import fc from "fast-check";
+import { CATALOGUE, type CatalogueEntry } from "../../src/functions/catalogue";
+import { clearMixtureCache } from "../../src/functions/mixture";
+import { resetActiveLibrary } from "../../src/library";
+import { cellFor, largeMixtureArgs, mixtureArgs, plausibleFor, plausibleMixtureArgs, plausibleRecipePairArgs, recipePairArgs, runs, SEED } from "./arbitraries";
+import { outcomeOf, outcomeProblem, show, type Outcome } from "./outcome";
+
+beforeAll(() => {
+  resetActiveLibrary();
+  clearMixtureCache();
+});
+
+/**
+ * Arguments for one entry: names/amounts together (and acid/base forms together), every other
+ * parameter from its generator; optionals sometimes omitted. Half the cases are hostile anywhere,
+ * half are sensible everywhere, so the solvers behind every function are reached too.
+ */
+function argsFor(entry: CatalogueEntry, mode: "hostile" | "plausible"): fc.Arbitrary<unknown[]> {
+  const parts: fc.Arbitrary<unknown[]>[] = [];
+  const hostile = mode === "hostile";
+  for (let i = 0; i < entry.params.length; i++) {
+    const p = entry.params[i];
+    const next = entry.params[i + 1]?.name;
+    if (p.name === "names" && next === "amounts") {
+      parts.push(hostile ? mixtureArgs : plausibleMixtureArgs);
+      i++;
+    } else if (p.name === "acid_form" && next === "base_form") {
+      parts.push(hostile ? recipePairArgs : plausibleRecipePairArgs);
+      i++;
+    } else if (!hostile) {
+      parts.push(plausibleFor(p.name).map((v) => [v]));
+    } else {
+      const cell = cellFor(p.name);
+      parts.push((p.optional ? fc.oneof({ weight: 3, arbitrary: cell }, { weight: 1, arbitrary: fc.constantFrom(null, undefined) }) : cell).map((v) => [v]));
+    }
+  }
+  return fc.tuple(...parts).map((chunks) => chunks.flat());
+}
+
+function sameOutcome(a: Outcome, b: Outcome): boolean {
+  if (a.kind !== b.kind) return false;
+  if (a.kind === "error" && b.kind === "error") return a.code === b.code && a.message === b.message;
+  if (a.kind === "value" && b.kind === "value") return JSON.stringify(a.value) === JSON.stringify(b.value);
+  return true;
+}
+
+const counts: Record<string, { cases: number; value: number; "#VALUE!": number; "#N/A": number }> = {};
+
+function check(entry: CatalogueEntry, args: unknown[]): void {
+  const before = structuredClone(args);
+  const first = outcomeOf(entry.fn, args);
+  const problem = outcomeProblem(first, entry.result);
+  if (problem) throw new Error(`AQ.${entry.id}${show(args)}: ${problem}`);
+  expect(args).toEqual(before);
+  // A value may come from the mixture cache the second time: it must be the same value.
+  const again = first.kind === "value" ? outcomeOf(entry.fn, args) : first;
+  if (!sameOutcome(first, again)) throw new Error(`AQ.${entry.id}${show(args)}: a second call gave another outcome`);
+  const c = (counts[entry.id] ??= { cases: 0, value: 0, "#VALUE!": 0, "#N/A": 0 });
+  c.cases++;
+  if (first.kind === "value") c.value++;
+  else if (first.kind === "error") c[first.code as "#VALUE!" | "#N/A"]++;
+}
+
+afterAll(() => {
+  const total = Object.values(counts).reduce((s, c) => s + c.cases, 0);
+  const lines = Object.entries(counts).map(([id, c]) => `AQ.${id}: ${c.cases} (value ${c.value}, #VALUE! ${c["#VALUE!"]}, #N/A ${c["#N/A"]})`);
+  console.log(`fuzz (direct calls, seed ${SEED}): ${total} cases over ${Object.keys(counts).length} functions — ${lines.join("; ")}`);
+});
+
+/** Functions that solve many equilibria per call (a curve of points, a search over a tolerance box). */
+const HEAVY = ["CURVE", "PHRANGE"];
+
+describe("every AQ function, random and hostile arguments", () => {
+  test.each(CATALOGUE.map((e) => [e.id, e] as const))("AQ.%s", (_id, entry) => {
+    const numRuns = runs(entry.params.length === 0 ? 50 : HEAVY.includes(entry.id) ? 250 : 500);
+    const args = fc.oneof(argsFor(entry, "hostile"), argsFor(entry, "plausible"));
+    fc.assert(
+      fc.property(args, (a) => check(entry, a)),
+      { seed: SEED, numRuns },
+    );
+  });
+});
+
+describe("functions over mixtures: thousands of components", () => {
+  const withMixture = CATALOGUE.filter((e) => e.params[0]?.name === "names" && e.params[1]?.name === "amounts");
+
+  test.each(withMixture.map((e) => [e.id, e] as const))("AQ.%s", (_id, entry) => {
+    const rest = entry.params.slice(2).map((p) => (p.optional ? fc.constant(null) : cellFor(p.name)));
+    fc.assert(
+      fc.property(largeMixtureArgs, fc.tuple(...rest), ([names, amounts], more) => check(entry, [names, amounts, ...more])),
+      { seed: SEED, numRuns: runs(3) },
+    );
+  });
+});
