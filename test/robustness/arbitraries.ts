@@ -194,10 +194,9 @@ export const mixtureArgs: fc.Arbitrary<[unknown, unknown]> = fc.oneof(
   {
     // Duplicates: the same substance many times.
     weight: 1,
-    arbitrary: fc.tuple(fc.constantFrom(...COMMON), fc.integer({ min: 2, max: 50 }), amountNumber).map(([name, n, x]) => [
-      Array.from({ length: n }, () => [name]),
-      Array.from({ length: n }, () => [x]),
-    ]),
+    arbitrary: fc
+      .tuple(fc.constantFrom(...COMMON), fc.integer({ min: 2, max: 50 }), amountNumber)
+      .map(([name, n, x]): [unknown, unknown] => [Array.from({ length: n }, () => [name]), Array.from({ length: n }, () => [x])]),
   },
 );
 
