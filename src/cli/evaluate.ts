@@ -4,7 +4,7 @@
  * value with its message — the same things a user sees in Excel.
  */
 import { DetailedCellError, HyperFormula, type RawCellContent } from "hyperformula";
-import { registerAqFunctions } from "./hf-plugin";
+import { registerAqFunctions, TABLE_FUNCTIONS } from "./hf-plugin";
 
 export type CellResult = number | string | boolean | null | { error: string; message: string };
 
@@ -25,10 +25,40 @@ function toResult(value: unknown): CellResult {
   return String(value);
 }
 
-/** Builds an engine holding the given sheets (name → rows of raw cell contents). */
+const TABLE_CALL = new RegExp(`(?:${TABLE_FUNCTIONS.map((f) => f.replace(".", "\\.")).join("|")})\\s*\\(`, "i");
+
+/**
+ * HyperFormula reserves a table's spill area when it first parses the formula, before the cells it
+ * refers to are computed; a table whose arguments hold formula cells cannot be sized then. Entering
+ * those formulas again once the sheet is computed (as a user would press Enter on them) sizes them
+ * from the real values. Two rounds cover a table whose arguments come from another table.
+ */
+function resizeTables(hf: HyperFormula, sheets: Record<string, RawCellContent[][]>): void {
+  for (let round = 0; round < 2; round++) {
+    const pending: { sheet: number; row: number; col: number; formula: string }[] = [];
+    for (const name of Object.keys(sheets)) {
+      const sheet = hf.getSheetId(name) as number;
+      (sheets[name] ?? []).forEach((row, r) =>
+        (row ?? []).forEach((cell, c) => {
+          if (typeof cell !== "string" || !cell.startsWith("=") || !TABLE_CALL.test(cell)) return;
+          const value = hf.getCellValue({ sheet, row: r, col: c });
+          if (value instanceof DetailedCellError) pending.push({ sheet, row: r, col: c, formula: cell });
+        }),
+      );
+    }
+    if (pending.length === 0) return;
+    hf.batch(() => {
+      for (const p of pending) hf.setCellContents({ sheet: p.sheet, row: p.row, col: p.col }, p.formula);
+    });
+  }
+}
+
+/** Builds an engine holding the given sheets (name → rows of raw cell contents), every table sized. */
 export function buildEngine(sheets: Record<string, RawCellContent[][]>): HyperFormula {
   registerAqFunctions();
-  return HyperFormula.buildFromSheets(sheets, CONFIG);
+  const hf = HyperFormula.buildFromSheets(sheets, CONFIG);
+  resizeTables(hf, sheets);
+  return hf;
 }
 
 /** Evaluates one formula as if typed in cell A1 of an empty sheet; a spilled result comes back as rows. */

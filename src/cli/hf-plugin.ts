@@ -117,6 +117,8 @@ function buildPlugin(): typeof FunctionPlugin {
           const values = ast.args.map((a) => (a === undefined ? undefined : this.evaluateAst(a, state)));
           return sizeOf(matrixOf(call(entry, values)));
         } catch {
+          // Typically a range holding formula cells that are not computed yet while the sheet is
+          // being built: evaluate.ts re-enters such formulas once the values exist.
           return ArraySize.scalar();
         }
       };
@@ -142,6 +144,9 @@ function sizeOf(rows: unknown[][]): ArraySize {
 let registered = false;
 
 /** Registers the AQ functions once per process (HyperFormula keeps a global plugin registry). */
+/** Ids of the AQ functions that return tables (their spill size is predicted before evaluation). */
+export const TABLE_FUNCTIONS: readonly string[] = CATALOGUE.filter((e) => e.result === "matrix").map((e) => `AQ.${e.id}`);
+
 export function registerAqFunctions(): void {
   if (registered) return;
   const translations: Record<string, string> = {};

@@ -167,8 +167,8 @@ export function MOLARMASS(substance: string): number {
  * Recipe for a buffer batch: what to weigh (or measure) of each component to reach a target pH and total concentration.
  * @customfunction RECIPE
  * @helpurl https://localhost:3000/help/recipe.html
- * @param acid_form The acidic form (e.g. "NaH2PO4·H2O", "histidine", "Tris").
- * @param base_form The basic form (e.g. "Na2HPO4·7H2O", "histidine HCl"), or a strong titrant ("NaOH", "HCl").
+ * @param acid_form The acidic form (e.g. "NaH2PO4·H2O", "L-histidine monohydrochloride monohydrate", "Tris HCl"), or a strong acid titrant ("HCl", "HCl 1 M") with a basic form.
+ * @param base_form The basic form (e.g. "Na2HPO4·7H2O", "L-histidine", "Tris"), or a strong base titrant ("NaOH", "NaOH 1 M") with an acidic form.
  * @param target_pH The pH to reach.
  * @param total_conc Total buffer concentration (the acid–base system), mol/L or unit text.
  * @param volume Batch volume, L or unit text.

@@ -83,6 +83,25 @@ describe("evaluateSheets", () => {
   });
 });
 
+test("a table whose arguments are formula cells spills at its real size", () => {
+  // HyperFormula sizes a spill before the cells it reads are computed; evaluate.ts re-enters it.
+  const [sheet] = evaluateSheets({
+    Sheet1: [
+      ["KH2PO4", "=0.05/2"],
+      ["Na2HPO4", "=B1"],
+      ["=AQ.SPECIES(A1:A2,B1:B2)"],
+    ],
+  });
+  expect(sheet!.errors).toEqual([]);
+  const rows = sheet!.values.slice(2);
+  expect(rows[0]).toEqual(["species", "charge", "mol/L", "fraction"]);
+  const names = rows.slice(1).map((r) => r[0]);
+  expect(names).toEqual(expect.arrayContaining(["H+", "OH-", "K+", "Na+", "H2PO4-", "HPO4^2-"]));
+  // phosphate mass balance through the spilled cells: 0.025 + 0.025 mol/L
+  const phosphate = rows.filter((r) => /PO4/.test(String(r[0]))).reduce((s, r) => s + (r[2] as number), 0);
+  expect(Math.abs(phosphate - 0.05) / 0.05).toBeLessThan(1e-9);
+});
+
 describe("protolyte command", () => {
   test("eval prints a number; --json prints {value}; an error value exits 1 with {error, message}", () => {
     const plain = run(["eval", '=AQ.PH("potassium hydrogen phthalate",0.05)']);
