@@ -26,7 +26,8 @@ import {
 import type { EntryKind, Library, LibraryDoc, SourceRecord, SubstanceRecord, SystemRecord, UserLayer, ValidationIssue } from "../library";
 import type { HostInfo } from "./host";
 import { describeImport, type ImportChange, type ImportMode } from "./import-preview";
-import { buildSource, buildSubstance, buildSystem, makeId, sourceToInput, substanceToInput, systemToInput } from "./forms";
+import { duplicateDraft, editDraft, type EditDraft, type EditKind } from "./drafts";
+import { buildSource, buildSubstance, buildSystem, makeId } from "./forms";
 import type { Built, FieldIssue, SourceInput, SubstanceInput, SystemInput } from "./forms";
 import type { PaneStores } from "./storage";
 import { tryMixture, type TryResult, type TryRow } from "./tryit";
@@ -52,12 +53,7 @@ export interface ImportPreview {
   next: LibraryDoc;
 }
 
-export type EditKind = "system" | "substance" | "source";
-
-export type EditDraft =
-  | { kind: "system"; layer: UserLayer; originalId: string | null; input: SystemInput; overrides: boolean }
-  | { kind: "substance"; layer: UserLayer; originalId: string | null; input: SubstanceInput; overrides: boolean }
-  | { kind: "source"; layer: UserLayer; originalId: string | null; input: SourceInput; overrides: boolean };
+export type { EditDraft, EditKind } from "./drafts";
 
 type Listener = () => void;
 
@@ -276,50 +272,14 @@ export class PaneController {
     });
   }
 
-  /** A draft for editing an existing user entry. */
+  /** A draft for editing an existing user entry (null for built-in entries: they are read-only). */
   editDraft(kind: EditKind, id: string): EditDraft | null {
-    const entry = this.library.get(id, kind);
-    if (!entry || entry.layer === "builtin") return null;
-    const layer = entry.layer;
-    const overrides = entry.overrides.length > 0;
-    if (kind === "system") return { kind, layer, originalId: id, input: systemToInput(entry.record as SystemRecord), overrides };
-    if (kind === "substance") return { kind, layer, originalId: id, input: substanceToInput(entry.record as SubstanceRecord), overrides };
-    return { kind, layer, originalId: id, input: sourceToInput(id, entry.record as SourceRecord), overrides };
+    return editDraft(this.library, kind, id);
   }
 
-  /**
-   * "Duplicate to edit": a built-in entry is copied under its own id into the workbook layer (saving
-   * overrides it there); a user entry is copied under a new id and name in its own layer.
-   */
+  /** "Duplicate to edit": see drafts.ts. */
   duplicateDraft(kind: EditKind, id: string): EditDraft | null {
-    const entry = this.library.get(id, kind);
-    if (!entry) return null;
-    if (entry.layer === "builtin") {
-      const layer = "workbook" as const;
-      if (kind === "system") return { kind, layer, originalId: id, input: systemToInput(entry.record as SystemRecord), overrides: true };
-      if (kind === "substance") return { kind, layer, originalId: id, input: substanceToInput(entry.record as SubstanceRecord), overrides: true };
-      return { kind, layer, originalId: id, input: sourceToInput(id, entry.record as SourceRecord), overrides: true };
-    }
-    const layer = entry.layer;
-    if (kind === "system") {
-      const r = clone(entry.record as SystemRecord);
-      r.name = `${r.name} (copy)`;
-      r.id = makeId(r.name, (x) => this.taken("system", x));
-      return { kind, layer, originalId: null, input: systemToInput(r), overrides: false };
-    }
-    if (kind === "substance") {
-      const r = clone(entry.record as SubstanceRecord);
-      r.name = `${r.name} (copy)`;
-      r.id = makeId(r.name, (x) => this.taken("substance", x));
-      delete r.aliases;
-      // The copy's formula must not claim the original's lookup name.
-      if (r.formula) r.formulaAlias = false;
-      const input = substanceToInput(r);
-      return { kind, layer, originalId: null, input, overrides: false };
-    }
-    const src = clone(entry.record as SourceRecord);
-    const newId = makeId(`${id}-copy`, (x) => this.taken("source", x));
-    return { kind, layer, originalId: null, input: { ...sourceToInput(newId, src), id: newId }, overrides: false };
+    return duplicateDraft(this.library, kind, id, (k, x) => this.taken(k, x));
   }
 
   // ---- import / export ----

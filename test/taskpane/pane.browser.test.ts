@@ -11,7 +11,7 @@
 import * as fs from "fs";
 import * as path from "path";
 import type { Locator, Page } from "playwright-core";
-import { ensureBuilt, launch, routeOffice, DIST, OFFICE_CDN, ROOT, type Launched } from "./support/browser";
+import { launch, routeOffice, snapshotDist, OFFICE_CDN, ROOT, type Launched } from "./support/browser";
 import { serveDirectory, type StaticServer } from "./support/static-server";
 
 jest.setTimeout(120000);
@@ -128,6 +128,7 @@ const XSS_SCRIPT = "<script>window.__injected.push('script')</script>";
 
 describe("task pane in Chromium with office.js from the npm copy", () => {
   let server: StaticServer;
+  let dist: ReturnType<typeof snapshotDist>;
   let browser: Launched;
   let page: Page;
   let w: PageWatch;
@@ -136,9 +137,9 @@ describe("task pane in Chromium with office.js from the npm copy", () => {
   let exported = "";
 
   beforeAll(async () => {
-    ensureBuilt();
+    dist = snapshotDist();
     fs.mkdirSync(ARTIFACTS, { recursive: true });
-    server = await serveDirectory(DIST);
+    server = await serveDirectory(dist.dir);
     browser = await launch();
     const requests: string[] = [];
     await routeOffice(browser.context, "npm", requests);
@@ -151,6 +152,7 @@ describe("task pane in Chromium with office.js from the npm copy", () => {
   afterAll(async () => {
     await browser?.close();
     await server?.close();
+    dist?.remove();
   });
 
   afterEach(async () => {
@@ -402,8 +404,8 @@ describe("task pane in Chromium with office.js from the npm copy", () => {
 
 describe("task pane when office.js cannot load at all", () => {
   test("works offline against browser storage", async () => {
-    ensureBuilt();
-    const server = await serveDirectory(DIST);
+    const dist = snapshotDist();
+    const server = await serveDirectory(dist.dir);
     const browser = await launch();
     try {
       const requests: string[] = [];
@@ -431,6 +433,7 @@ describe("task pane when office.js cannot load at all", () => {
     } finally {
       await browser.close();
       await server.close();
+      dist.remove();
     }
   });
 });

@@ -24,6 +24,18 @@ export function ensureBuilt(): void {
   execSync("npx webpack --mode production --stats errors-only", { cwd: ROOT, stdio: "pipe", timeout: 240000 });
 }
 
+/**
+ * A private copy of dist/ for one test file: other builds in the same working tree clean and rewrite
+ * dist/ at any moment, and a page must not load half of one build and half of another.
+ */
+export function snapshotDist(): { dir: string; remove(): void } {
+  ensureBuilt();
+  const dir = fs.mkdtempSync(path.join(os.tmpdir(), "protolyte-dist-"));
+  fs.cpSync(DIST, dir, { recursive: true });
+  if (!fs.existsSync(path.join(dir, "taskpane.html"))) throw new Error("dist/ changed while it was copied; run the test again");
+  return { dir, remove: () => fs.rmSync(dir, { recursive: true, force: true }) };
+}
+
 export interface Launched {
   context: BrowserContext;
   profile: string;
