@@ -104,7 +104,9 @@ function linearise(box: BoxPH, nominal: number): { low: number; high: number; si
     if (!a.ok) return a;
     const b = box.at(dn);
     if (!b.ok) return b;
-    const d = (a.value - b.value) / (2 * h);
+    // An interval below the resolution of doubles has no measurable effect (h underflows to 0).
+    const d = h > 0 ? (a.value - b.value) / (2 * h) : 0;
+    if (!Number.isFinite(d)) return fail("no-convergence", `The pH derivative with respect to ${q.label} is not finite; no result is given.`);
     signs.push(d >= 0 ? 1 : -1);
     spread += Math.abs(d) * half;
   }
