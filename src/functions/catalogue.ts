@@ -27,6 +27,7 @@ export const CATALOGUE: readonly CatalogueEntry[] = [
   { id: "BETA", fn: AQ.BETA, params: [req("names"), req("amounts"), opt("temperature"), opt("activity")], result: "scalar" },
   { id: "CAPACITY", fn: AQ.CAPACITY, params: [req("names"), req("amounts"), req("delta_pH"), opt("temperature"), opt("activity")], result: "scalar" },
   { id: "SPECIES", fn: AQ.SPECIES, params: [req("names"), req("amounts"), opt("species"), opt("temperature"), opt("activity")], result: "matrix" },
+  { id: "CHECK", fn: AQ.CHECK, params: [req("names"), req("amounts"), opt("temperature"), opt("activity")], result: "scalar" },
   { id: "IONIC", fn: AQ.IONIC, params: [req("names"), req("amounts"), opt("temperature")], result: "scalar" },
   { id: "OSMOLARITY", fn: AQ.OSMOLARITY, params: [req("names"), req("amounts"), opt("temperature")], result: "scalar" },
   { id: "PKA", fn: AQ.PKA, params: [req("substance"), opt("step"), opt("temperature"), opt("ionic_strength")], result: "scalar" },

@@ -19,6 +19,7 @@ import { curve } from "./aq/curve";
 import { phRange } from "./aq/ph-range";
 import { recipe } from "./aq/recipe";
 import { beta } from "./aq/beta";
+import { check } from "./aq/check";
 import { constantsId } from "./aq/constants-id";
 import { ionic } from "./aq/ionic";
 import { molarMass } from "./aq/molar-mass";
@@ -110,6 +111,20 @@ export function CAPACITY(names: any[][], amounts: any[][], delta_pH: any, temper
  */
 export function SPECIES(names: any[][], amounts: any[][], species?: string, temperature?: any, activity?: string): any[][] {
   return guard(() => speciesTable(names, amounts, species, temperature, activity));
+}
+
+/**
+ * What to know about a mixture's result, as text: "OK: buffer, I = … mol/L", or "CHECK: …" with every warning (ionic strength beyond the activity model's range, ΔrH° unknown away from 25 °C, buffer overwhelmed by excess strong acid or base).
+ * @customfunction CHECK
+ * @helpurl https://localhost:3000/help/check.html
+ * @param names Substance names.
+ * @param amounts Concentrations, mol/L (or unit text), same shape as names.
+ * @param [temperature] Temperature, °C (0–100). Default 25.
+ * @param [activity] Activity model: "davies" (default), "ideal" or "debye-huckel".
+ * @returns One line of text starting with "OK" or "CHECK".
+ */
+export function CHECK(names: any[][], amounts: any[][], temperature?: any, activity?: string): string {
+  return guard(() => check(names, amounts, temperature, activity));
 }
 
 /**
