@@ -34,3 +34,4 @@ export { log10Gamma } from "./activity/model";
 export { apparentPKa, osmolarity, ionicStrength } from "./derived";
 export { classifyRegime } from "./regime";
 export { parseQuantity, type QuantityDimension, type ParseOptions } from "./units";
+export * from "./workflows";
