@@ -2,6 +2,7 @@
  * Words for what the browser shows: layers, statuses, citations, value lines. Pure functions,
  * tested without a DOM; the views put the results into text nodes.
  */
+import { describeProvenance, formatSource } from "../library";
 import type { EntryKind, LayerName, MergedEntry, SourceRecord, SubstanceRecord, SystemRecord, IonRecord, ValueRecord } from "../library";
 import { STATUS_LABEL } from "./forms";
 
@@ -15,18 +16,9 @@ export const KIND_LABEL: Record<EntryKind, string> = {
   atomicWeight: "atomic weight",
 };
 
-/** "Goldberg, Kishore, Lennen (2002) Thermodynamic quantities … Journal …, 31, 231." */
+/** A source as a reference (the library's wording, shared with reports), or the unknown key. */
 export function citation(source: SourceRecord | undefined, id: string): string {
-  if (!source) return `unknown source '${id}'`;
-  const parts: string[] = [];
-  const who = source.authors ? `${source.authors}${source.year ? ` (${source.year})` : ""}` : source.year ? `(${source.year})` : "";
-  if (who) parts.push(who);
-  parts.push(source.title);
-  const where = [source.container, source.edition, source.volume, source.pages].filter(Boolean).join(", ");
-  if (where) parts.push(where);
-  if (source.doi) parts.push(`doi:${source.doi}`);
-  else if (source.url) parts.push(source.url);
-  return `${parts.join(". ")}.`.replace(/\.\.$/, ".");
+  return source ? formatSource(source) : `unknown source '${id}'`;
 }
 
 export interface ValueLine {
@@ -39,16 +31,12 @@ export interface ValueLine {
   statusText: string;
   /** True for values a QA reviewer must not take as published. */
   flagged: boolean;
-  /** Citation with locator, or the reason for common practice / unverified. */
+  /** The library's provenance line: citation with locator, or the reason for common practice / unverified. */
   provenance: string;
-  note?: string;
 }
 
 export function valueLine(label: string, v: ValueRecord, sources: (id: string) => SourceRecord | undefined): ValueLine {
   const amount = v.unit === "1" ? String(v.value) : `${v.value} ${v.unit}`;
-  let provenance = "";
-  if (v.source) provenance = `${citation(sources(v.source), v.source)}${v.locator ? ` — ${v.locator}` : ""}`;
-  else if (v.status !== "published") provenance = "no published source";
   return {
     label,
     amount,
@@ -56,8 +44,7 @@ export function valueLine(label: string, v: ValueRecord, sources: (id: string) =
     status: v.status,
     statusText: STATUS_LABEL[v.status],
     flagged: v.status !== "published",
-    provenance,
-    note: v.note,
+    provenance: describeProvenance(v, sources),
   };
 }
 

@@ -23,9 +23,9 @@ const workbook: LibraryDoc = {
 const lib = createLibrary({ builtin: BUILTIN_LIBRARY, workbook });
 const sources = (id: string) => lib.get(id, "source")?.record as SourceRecord | undefined;
 
-test("citations read like references and name unknown keys", () => {
+test("citations use the library's reference wording and name unknown keys", () => {
   expect(citation(sources("goldberg2002"), "goldberg2002")).toBe(
-    "R. N. Goldberg, N. Kishore, R. M. Lennen (2002). Thermodynamic quantities for the ionization reactions of buffers. Journal of Physical and Chemical Reference Data, 31, 231.",
+    "R. N. Goldberg, N. Kishore, R. M. Lennen, Thermodynamic quantities for the ionization reactions of buffers. Journal of Physical and Chemical Reference Data, 31, 231 (2002)",
   );
   expect(citation(undefined, "gone")).toBe("unknown source 'gone'");
 });
@@ -41,11 +41,11 @@ test("published values show unit, conditions and their source with the locator",
 
 test("common-practice and unverified values are flagged and say so", () => {
   const acetate = valuesOf(lib.get("acetate", "system")!, sources);
-  expect(acetate).toEqual([expect.objectContaining({ label: "pKa", amount: "4.8", statusText: "common practice", flagged: true, provenance: "no published source" })]);
+  expect(acetate).toEqual([expect.objectContaining({ label: "pKa", amount: "4.8", statusText: "common practice", flagged: true, provenance: "rounded value used on Halvorsen batch records" })]);
   const amine = valuesOf(lib.get("hb-amine", "system")!, sources);
-  expect(amine.map((v) => [v.label, v.statusText, v.flagged])).toEqual([
-    ["pKa", "from memory, unverified", true],
-    ["ΔrH°", "from memory, unverified", true],
+  expect(amine.map((v) => [v.label, v.statusText, v.flagged, v.provenance])).toEqual([
+    ["pKa", "from memory, unverified", true, "from memory, unverified: from memory"],
+    ["ΔrH°", "from memory, unverified", true, "from memory, unverified: estimate"],
   ]);
 });
 

@@ -151,8 +151,7 @@ export class BrowseView {
                 el("span", { class: "amount" }, v.amount),
                 el("span", {}, ` (${v.conditions})`),
                 el("span", { class: `badge ${v.flagged ? "flag" : "layer-builtin"}` }, v.statusText),
-                el("span", { class: "prov" }, v.provenance ? `Source: ${v.provenance}` : ""),
-                v.note ? el("span", { class: "prov" }, `Note: ${v.note}`) : null,
+                el("span", { class: "prov" }, `${v.status === "published" ? "Source" : "Provenance"}: ${v.provenance}`),
               ),
             ),
           )
