@@ -38,4 +38,9 @@ export const LIMITS = {
   ionicStrengthStrong: 0.5,
   /** K: a pKa without ΔrH° is held at its 25 °C value; warn when |T − 25 °C| exceeds this. */
   missingEnthalpyWarnK: 5,
+  /**
+   * pH units: a step whose pKa lies further than this from the solved pH holds under 0.1 % of its
+   * system on the minor side; an unknown ΔrH° there cannot move the result measurably, so no warning.
+   */
+  missingEnthalpyRelevance: 3,
 } as const;

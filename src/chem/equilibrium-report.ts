@@ -64,7 +64,7 @@ export function buildEquilibrium(core: ChargeBalanceSolver, agg: Aggregate): Equ
   const warnings: string[] = [];
   const wI = ionicStrengthWarning(I, core.model);
   if (wI) warnings.push(wI);
-  warnings.push(...missingEnthalpyWarnings(agg.systems, core.totals, core.temperatureC));
+  warnings.push(...missingEnthalpyWarnings(agg.systems, core.totals, core.temperatureC, pH));
   return {
     ok: true,
     pH,

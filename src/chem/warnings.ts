@@ -15,13 +15,14 @@ export function ionicStrengthWarning(I: number, model: ActivityModel): string | 
   return null;
 }
 
-/** pKa steps without ΔrH° used away from 25 °C. */
-export function missingEnthalpyWarnings(systems: AcidBaseSystem[], totals: ArrayLike<number>, temperatureC: number): string[] {
+/** pKa steps without ΔrH° used away from 25 °C, where they matter (pKa within a few units of the pH). */
+export function missingEnthalpyWarnings(systems: AcidBaseSystem[], totals: ArrayLike<number>, temperatureC: number, pH: number): string[] {
   const out: string[] = [];
   if (Math.abs(temperatureC - DEFAULTS.temperatureC) <= LIMITS.missingEnthalpyWarnK) return out;
   for (let s = 0; s < systems.length; s++) {
     if (!(totals[s] > 0)) continue;
-    const missing = systems[s].steps.map((st, j) => (st.dH === undefined ? j + 1 : 0)).filter((j) => j > 0);
+    const relevant = (pKa: number) => Math.abs(pKa - pH) <= LIMITS.missingEnthalpyRelevance;
+    const missing = systems[s].steps.map((st, j) => (st.dH === undefined && relevant(st.pKa) ? j + 1 : 0)).filter((j) => j > 0);
     if (missing.length > 0) {
       out.push(
         `ΔrH° is unknown for ${systems[s].name} (step ${missing.join(", ")}): its pKa is held at the 25 °C value at ${fmt(temperatureC)} °C.`,

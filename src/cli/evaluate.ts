@@ -16,7 +16,8 @@ export interface FormulaResult {
 }
 
 // smartRounding off: HyperFormula would otherwise round results to about 10 significant digits.
-const CONFIG = { licenseKey: "gpl-v3", maxRows: 200_000, maxColumns: 1_000, smartRounding: false } as const;
+// useArrayArithmetic: {1;1}*A4 is an array, as in Excel with dynamic arrays.
+const CONFIG = { licenseKey: "gpl-v3", maxRows: 200_000, maxColumns: 1_000, smartRounding: false, useArrayArithmetic: true } as const;
 
 function toResult(value: unknown): CellResult {
   if (value instanceof DetailedCellError) return { error: value.value, message: value.message ?? "" };

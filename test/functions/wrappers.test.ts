@@ -1,0 +1,133 @@
+/**
+ * The AQ functions called exactly as Excel calls them: ranges as rows of columns (even one cell),
+ * omitted optional arguments as null, empty cells as "" — through the CustomFunctions stand-in that
+ * jest installs. Checks argument handling and error mapping; the chemistry itself is tested against
+ * published values in test/chem and through the spreadsheet engine in test/cli and test/docs.
+ */
+import * as AQ from "../../src/functions/functions";
+import { CATALOGUE } from "../../src/functions/catalogue";
+
+function errorOf(call: () => unknown): { code: string; message: string } {
+  try {
+    call();
+  } catch (e) {
+    expect(e).toBeInstanceOf(CustomFunctions.Error);
+    const err = e as CustomFunctions.Error;
+    return { code: err.code, message: err.message };
+  }
+  throw new Error("expected the call to fail");
+}
+
+const KHP = [["potassium hydrogen phthalate"]];
+
+describe("argument shapes as Excel passes them", () => {
+  test("omitted optionals arrive as null and take the documented defaults (25 °C, Davies)", () => {
+    const withNulls = AQ.PH(KHP, [[0.05]], null, null as unknown as string);
+    const explicit = AQ.PH(KHP, [[0.05]], 25, "davies");
+    expect(withNulls).toBe(explicit);
+    // Hamer, Pinching & Acree (1946): 0.05 mol/kg KHP, pH(S) 4.005 at 25 °C; ±0.02 Davies vs Bates–Guggenheim.
+    expect(Math.abs(withNulls - 4.005)).toBeLessThanOrEqual(0.02);
+  });
+
+  test("blank rows in both ranges are skipped, in columns or rows", () => {
+    const column = AQ.PH([["KH2PO4"], [""], ["Na2HPO4"]], [[0.025], [""], [0.025]]);
+    const row = AQ.PH([["KH2PO4", "", "Na2HPO4"]], [[0.025, "", 0.025]]);
+    const compact = AQ.PH([["KH2PO4"], ["Na2HPO4"]], [[0.025], [0.025]]);
+    expect(column).toBe(compact);
+    expect(row).toBe(compact);
+  });
+
+  test("a blank amount read as 0 (number ranges) beside a blank name is skipped too", () => {
+    expect(AQ.PH([["KH2PO4"], [""]], [[0.05], [0]])).toBe(AQ.PH([["KH2PO4"]], [[0.05]]));
+  });
+
+  test("unit text and numbers give the same result; temperature as unit text", () => {
+    const a = AQ.PH([["Tris"], ["Tris HCl"]], [["50 mM"], ["50 mmol/L"]], "37 degC");
+    const b = AQ.PH([["Tris"], ["Tris HCl"]], [[0.05], [0.05]], 37);
+    expect(a).toBe(b);
+  });
+
+  test("names are case- and spacing-insensitive", () => {
+    expect(AQ.PH([["  tris   hcl "]], [[0.01]])).toBe(AQ.PH([["Tris HCl"]], [[0.01]]));
+  });
+});
+
+describe("errors are spreadsheet error values with a message", () => {
+  test.each([
+    ["unknown name, with suggestions", () => AQ.PH([["sodium acetat"]], [[0.1]]), /Unknown substance 'sodium acetat'.*sodium acetate/],
+    ["mismatched ranges", () => AQ.PH([["KH2PO4"], ["Na2HPO4"]], [[0.025]]), /2×1.*1×1/],
+    ["negative amount", () => AQ.PH([["NaCl"]], [[-0.1]]), /negative/],
+    ["text that is not a quantity", () => AQ.PH([["NaCl"]], [["lots"]]), /amount of 'NaCl'/],
+    ["amount without a name", () => AQ.PH([["NaCl"], [""]], [[0.1], [0.2]]), /no substance name/],
+    ["name without an amount", () => AQ.PH([["NaCl"], ["KCl"]], [[0.1], [""]]), /no amount for 'KCl'/],
+    ["empty mixture", () => AQ.PH([[""]], [[""]]), /empty/],
+    ["temperature out of range", () => AQ.PH([["NaCl"]], [[0.1]], 120), /outside 0–100 °C/],
+    ["unknown activity model", () => AQ.PH([["NaCl"]], [[0.1]], null, "pitzer"), /activity 'pitzer' is not known/],
+    ["PKA step that does not exist", () => AQ.PKA("phosphate", 4), /step 4 does not exist/],
+    ["PKA of a polyprotic system without a step", () => AQ.PKA("citric acid", null as unknown as number), /give step 1 to 3/],
+    ["MOLARMASS of an unknown form", () => AQ.MOLARMASS("unobtainium"), /Unknown substance/],
+  ])("%s → #VALUE!", (_what, call, message) => {
+    const err = errorOf(call);
+    expect(err.code).toBe("#VALUE!");
+    expect(err.message).toMatch(message);
+    expect(err.message.length).toBeLessThanOrEqual(250);
+    expect(err.message).not.toMatch(/\n/);
+  });
+
+  test("a species not in the mixture → #N/A listing the species it has", () => {
+    const err = errorOf(() => AQ.SPECIES([["acetic acid"]], [[0.1]], "NH4+"));
+    expect(err.code).toBe("#N/A");
+    expect(err.message).toMatch(/species .NH4\+. is not in this mixture; it has: H\+, OH-/);
+  });
+
+  test("a target the titrant cannot reach → #N/A saying which way it goes", () => {
+    const err = errorOf(() => AQ.ADJUST([["acetic acid"], ["sodium acetate"]], [[0.05], [0.05]], 4, "NaOH"));
+    expect(err.code).toBe("#N/A");
+    expect(err.message).toMatch(/raises the pH/);
+  });
+});
+
+describe("results", () => {
+  test("every scalar function returns a finite number or text; every table a rectangular matrix", () => {
+    const mix: [unknown[][], unknown[][]] = [[["KH2PO4"], ["Na2HPO4"]], [[0.025], [0.025]]];
+    const calls: Record<string, () => unknown> = {
+      PH: () => AQ.PH(...mix),
+      BETA: () => AQ.BETA(...mix),
+      CHECK: () => AQ.CHECK(...mix),
+      IONIC: () => AQ.IONIC(...mix),
+      OSMOLARITY: () => AQ.OSMOLARITY(...mix),
+      SPECIES: () => AQ.SPECIES(...mix),
+      PKA: () => AQ.PKA("phosphate", 2),
+      MOLARMASS: () => AQ.MOLARMASS("Na2HPO4·7H2O"),
+      CONSTANTS_ID: () => AQ.CONSTANTS_ID(),
+      ADJUST: () => AQ.ADJUST(...mix, 7.2, "NaOH"),
+      CAPACITY: () => AQ.CAPACITY(...mix, 0.1),
+      RECIPE: () => AQ.RECIPE("KH2PO4", "Na2HPO4", 6.865, 0.05, 1),
+      CURVE: () => AQ.CURVE(...mix, "NaOH", 0.1, 0.1, 0.03, 7),
+      PHRANGE: () => AQ.PHRANGE(...mix, 0.02),
+    };
+    expect(Object.keys(calls).sort()).toEqual(CATALOGUE.map((c) => c.id).sort());
+    for (const entry of CATALOGUE) {
+      const value = calls[entry.id]!();
+      if (entry.result === "scalar") {
+        expect({ id: entry.id, ok: (typeof value === "number" && Number.isFinite(value)) || typeof value === "string" }).toEqual({ id: entry.id, ok: true });
+      } else {
+        const rows = value as unknown[][];
+        const width = rows[0]!.length;
+        for (const row of rows) expect({ id: entry.id, width: row.length }).toEqual({ id: entry.id, width });
+        for (const cell of rows.flat()) {
+          expect({ id: entry.id, ok: (typeof cell === "number" && Number.isFinite(cell)) || typeof cell === "string" }).toEqual({ id: entry.id, ok: true });
+        }
+      }
+    }
+  });
+
+  test("MOLARMASS matches the CIAAW-based spot check for Na2HPO4·7H2O (268.07 g/mol)", () => {
+    // REFERENCES §4 spot check, from CIAAW conventional atomic weights; ±0.01 g/mol (printed precision).
+    expect(Math.abs(AQ.MOLARMASS("Na2HPO4·7H2O") - 268.07)).toBeLessThanOrEqual(0.01);
+  });
+
+  test("CONSTANTS_ID is the library version and fingerprint", () => {
+    expect(AQ.CONSTANTS_ID()).toMatch(/^PL-\d+\.\d+\.\d+-[0-9a-f]{8,12}$/);
+  });
+});
