@@ -40,8 +40,14 @@ export function orThrow<T extends { ok: boolean }>(result: T | Failure): Exclude
   return result as Exclude<T, Failure>;
 }
 
-/** A finite number or a #VALUE! error: a cell never shows NaN or Infinity. */
+/**
+ * A finite number or a #VALUE! error: a cell never shows NaN or Infinity. An infinity is an overflow
+ * from inputs too large (grams for a 1e306 L batch), said so; a NaN is a defect ("internal error").
+ */
 export function finite(value: number, what: string): number {
+  if (value === Infinity || value === -Infinity) {
+    throw new AqError("value", `${what} is too large to be a number (it overflows): check the size of the inputs, such as volumes and concentrations`);
+  }
   if (!Number.isFinite(value)) throw new AqError("value", `internal error: ${what} is not a finite number`);
   return value;
 }

@@ -21,6 +21,7 @@ test.each<[string, () => unknown, "scalar" | "matrix"]>([
   ["a #VALUE! without a message", cfError("#VALUE!", " "), "scalar"],
   ["a two-line message", cfError("#N/A", "one\ntwo"), "scalar"],
   ["a 251-character message", cfError("#VALUE!", "x".repeat(251)), "scalar"],
+  ["an internal error", cfError("#VALUE!", "internal error: Cannot read properties of undefined"), "scalar"],
 ])("flags %s", (_what, fn, result) => {
   expect(outcomeProblem(outcomeOf(fn, []), result)).not.toBeNull();
 });

@@ -78,6 +78,7 @@ function cellProblem(v: CellResult): string | null {
   if (v.message.trim() === "") return `${v.error} without a message`;
   if (/[\r\n]/.test(v.message)) return "a message on more than one line";
   if (v.message.length > 250) return `a message of ${v.message.length} characters`;
+  if (/^internal error/.test(v.message)) return `an unexpected exception inside: ${v.message}`;
   return null;
 }
 

@@ -1,7 +1,8 @@
 /**
  * What a spreadsheet call may produce, and the check every robustness test applies to it: a finite
  * number, a string or boolean, a well-formed matrix of those, or a CustomFunctions.Error with code
- * #VALUE! or #N/A and a one-line message of 1–250 characters. Anything else is a defect.
+ * #VALUE! or #N/A and a one-line message of 1–250 characters that is not an "internal error" (an
+ * exception the code did not expect). Anything else is a defect.
  */
 export type Outcome =
   | { kind: "value"; value: unknown }
@@ -54,6 +55,8 @@ export function outcomeProblem(o: Outcome, result: "scalar" | "matrix"): string 
   if (typeof o.message !== "string" || o.message.trim() === "") return "an error without a message";
   if (/[\r\n]/.test(o.message)) return "a message on more than one line";
   if (o.message.length > 250) return `a message of ${o.message.length} characters (at most 250)`;
+  // errors.ts turns an unexpected exception into "internal error: …": allowed in a cell, a defect here.
+  if (/^internal error/.test(o.message)) return `an unexpected exception inside: ${o.message}`;
   return null;
 }
 

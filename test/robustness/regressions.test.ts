@@ -5,6 +5,7 @@ import { spawnSync } from "node:child_process";
 import { join } from "node:path";
 import { parseQuantity } from "../../src/chem";
 import { goldenMax } from "../../src/chem/workflows/golden";
+import { finite } from "../../src/functions/errors";
 import * as AQ from "../../src/functions/functions";
 import { resetActiveLibrary } from "../../src/library";
 import { outcomeOf, outcomeProblem } from "./outcome";
@@ -98,5 +99,20 @@ describe("AQ.PHRANGE with tiny tolerances ends", () => {
     const [low, high] = table[1] as number[];
     expect(high - low).toBeGreaterThanOrEqual(0);
     expect(high - low).toBeLessThan(1e-6);
+  });
+});
+
+describe("an overflow from huge inputs is said so, not reported as an internal error", () => {
+  // AQ.RECIPE for a 3e306 L batch showed "#VALUE! internal error: grams is not a finite number".
+  test("AQ.RECIPE with a 3e306 L batch", () => {
+    const o = outcomeOf(AQ.RECIPE, ["NaH2PO4", "Na2HPO4", 4.613, 0.0541, 3.253171503736697e306, 0, 1, "NaCl", null]);
+    expect(o).toMatchObject({ kind: "error", code: "#VALUE!", message: expect.stringMatching(/^grams is too large to be a number \(it overflows\): check the size of the inputs/) });
+    expect(outcomeProblem(o, "matrix")).toBeNull();
+  });
+
+  test("a NaN is still an internal error (a defect, not an input problem)", () => {
+    expect(() => finite(NaN, "pH")).toThrow(/^internal error: pH is not a finite number$/);
+    expect(() => finite(-Infinity, "β")).toThrow(/^β is too large to be a number/);
+    expect(finite(-0, "x")).toBe(-0);
   });
 });
