@@ -101,3 +101,27 @@ describe("functions over mixtures: thousands of components", () => {
     );
   });
 });
+
+describe("one argument at an extreme, the others sensible", () => {
+  // Random cases rarely combine sensible arguments with one extreme value; this sweep does, for
+  // every parameter of every function (it found the RECIPE overflow for a 3e306 L batch).
+  const EXTREMES: unknown[] = [0, -0, -1, 5e-324, 1e-300, 1e-12, 20, 1e6, 1e300, 1.7e308, -1.7e308, NaN, Infinity, "1e308", "1e-320", " ", "0x10", true, [[]], [[1, 2]]];
+
+  test.each(CATALOGUE.filter((e) => e.params.length > 0).map((e) => [e.id, e] as const))("AQ.%s", (_id, entry) => {
+    // Bases that give a value, so that each extreme is the only thing wrong with the call.
+    const bases = fc
+      .sample(argsFor(entry, "plausible"), { seed: SEED, numRuns: 200 })
+      .filter((a) => outcomeOf(entry.fn, a).kind === "value")
+      .slice(0, runs(3));
+    expect(bases.length).toBeGreaterThan(0);
+    for (const base of bases) {
+      for (let i = 0; i < base.length; i++) {
+        for (const extreme of EXTREMES) {
+          const args = [...base];
+          args[i] = extreme;
+          check(entry, args);
+        }
+      }
+    }
+  });
+});
