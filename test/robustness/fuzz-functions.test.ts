@@ -81,7 +81,7 @@ const HEAVY = ["CURVE", "PHRANGE"];
 
 describe("every AQ function, random and hostile arguments", () => {
   test.each(CATALOGUE.map((e) => [e.id, e] as const))("AQ.%s", (_id, entry) => {
-    const numRuns = runs(entry.params.length === 0 ? 50 : HEAVY.includes(entry.id) ? 250 : 500);
+    const numRuns = runs(entry.params.length === 0 ? 50 : HEAVY.includes(entry.id) ? 120 : 300);
     const args = fc.oneof(argsFor(entry, "hostile"), argsFor(entry, "plausible"));
     fc.assert(
       fc.property(args, (a) => check(entry, a)),
