@@ -1,6 +1,7 @@
 /**
  * Wires the controller to the views: renders everything once, re-renders on every change of the
- * library, and routes "edit this" from Browse to the editor tab.
+ * library, routes "edit this" from Browse to the editor tab, and tells the Picture view when it is
+ * opened or left (it follows Excel's selection only while open).
  */
 import { byId, replaceChildren } from "./dom";
 import type { PaneController } from "./controller";
@@ -10,9 +11,16 @@ import { FilesView } from "./views/files";
 import { renderHeader, renderProblems } from "./views/header";
 import { setupTabs } from "./views/tabs";
 import { TryView } from "./views/try";
+import { PictureView } from "./views/picture";
+import type { SelectionExcel } from "./excel-selection";
 import { message } from "./views/ui";
 
-export function startApp(ctl: PaneController): void {
+export interface AppOptions {
+  /** Excel's API inside Excel (the Picture view follows the selected cell), null in a browser page. */
+  excel?: SelectionExcel | null;
+}
+
+export function startApp(ctl: PaneController, opts: AppOptions = {}): void {
   const statusBox = byId("status");
   const status = (node: HTMLElement): void => replaceChildren(statusBox, node);
   let showTab: (id: string) => void = () => undefined;
@@ -26,7 +34,12 @@ export function startApp(ctl: PaneController): void {
   });
   const files = new FilesView(byId("panel-files"), ctl, status);
   const tryView = new TryView(byId("panel-try"), ctl);
-  showTab = setupTabs(byId("tabs"), () => replaceChildren(statusBox));
+  const picture = new PictureView(byId("panel-picture"), ctl, { tryMixture: () => tryView.mixture(), excel: opts.excel ?? null });
+  showTab = setupTabs(byId("tabs"), (panel) => {
+    replaceChildren(statusBox);
+    if (panel === "panel-picture") picture.show();
+    else picture.hide();
+  });
 
   const all = (): void => {
     renderHeader(ctl);
@@ -34,11 +47,13 @@ export function startApp(ctl: PaneController): void {
     browse.render();
     files.renderPreview();
     tryView.refresh();
+    picture.refresh();
   };
   if (ctl.startupWarnings.length) status(message("warn", ctl.startupWarnings.join(" ")));
   editor.render();
   files.render();
   tryView.render();
+  picture.render();
   all();
   ctl.subscribe(() => {
     all();

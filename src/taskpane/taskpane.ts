@@ -7,6 +7,7 @@ import { findExcelRun } from "../library";
 import { startApp } from "./app";
 import { PaneController } from "./controller";
 import { workbookStore, type ExcelApi } from "./excel-store";
+import type { SelectionExcel } from "./excel-selection";
 import { detectHost, type HostInfo } from "./host";
 import { browserStores, personalStore, usableLocalStorage, type PaneStores } from "./storage";
 
@@ -26,10 +27,12 @@ function storesFor(host: HostInfo): { host: HostInfo; stores: PaneStores } {
 }
 
 async function boot(): Promise<void> {
-  const { host, stores } = storesFor(await detectHost());
+  const detected = await detectHost();
+  const { host, stores } = storesFor(detected);
   const ctl = new PaneController(host, stores, usableLocalStorage() !== null);
   await ctl.init();
-  startApp(ctl);
+  const excel = detected.kind === "excel" ? (globalThis as unknown as { Excel: SelectionExcel }).Excel : null;
+  startApp(ctl, { excel });
 }
 
 function whenDomReady(run: () => void): void {

@@ -29,7 +29,7 @@ export type TryResult =
       temperatureC: number;
       warnings: string[];
       /** Which library entry each row used. */
-      used: { row: number; id: string; name: string; layer: LayerName; overrides: LayerName[] }[];
+      used: UsedEntry[];
     }
   | { ok: false; issues: TryIssue[] };
 
@@ -40,10 +40,15 @@ export const REGIME_TEXT: Record<Regime, string> = {
   "no-buffer": "no buffering system",
 };
 
-export function tryMixture(library: Library, rows: readonly TryRow[], temperatureText: string, activity: ActivityModel = DEFAULTS.activity): TryResult {
+export type UsedEntry = { row: number; id: string; name: string; layer: LayerName; overrides: LayerName[] };
+
+export type ReadMixtureResult = { ok: true; mix: Mixture; temperatureC: number; used: UsedEntry[] } | { ok: false; issues: TryIssue[] };
+
+/** Rows and temperature text → the engine's mixture through the library in effect (no solving). */
+export function readMixture(library: Library, rows: readonly TryRow[], temperatureText: string): ReadMixtureResult {
   const issues: TryIssue[] = [];
   const mix: Mixture = [];
-  const used: Extract<TryResult, { ok: true }>["used"] = [];
+  const used: UsedEntry[] = [];
   let temperatureC: number = DEFAULTS.temperatureC;
   if (temperatureText.trim() !== "") {
     const t = parseQuantity(/^[-+]?[\d.]+$/.test(temperatureText.trim()) ? Number(temperatureText.trim()) : temperatureText, "temperature");
@@ -69,6 +74,13 @@ export function tryMixture(library: Library, rows: readonly TryRow[], temperatur
   });
   if (issues.length) return { ok: false, issues };
   if (mix.length === 0) return { ok: false, issues: [{ row: -1, field: "mixture", message: "enter at least one substance and its amount" }] };
+  return { ok: true, mix, temperatureC, used };
+}
+
+export function tryMixture(library: Library, rows: readonly TryRow[], temperatureText: string, activity: ActivityModel = DEFAULTS.activity): TryResult {
+  const m = readMixture(library, rows, temperatureText);
+  if (!m.ok) return m;
+  const { mix, temperatureC, used } = m;
   const r = solveEquilibrium(mix, { temperatureC, activity });
   if (!r.ok) return { ok: false, issues: [{ row: -1, field: "mixture", message: r.message }] };
   return { ok: true, pH: r.pH, pcH: r.pcH, ionicStrength: r.ionicStrength, regime: r.regime, temperatureC, warnings: r.warnings, used };

@@ -294,8 +294,8 @@ describe("task pane in Chromium with office.js from the npm copy", () => {
     expect(await tryPH(page, "HB7 base", "10 mM")).toMatch(/Unknown substance/);
     const fingerprintBefore = await page.locator("#fingerprint").innerText();
     await chooseFile(page, "halvorsen-lab.json", exported);
-    const preview = await page.locator("#import-preview").innerText();
-    expect(preview).toMatch(/2 changes/);
+    // the file is read asynchronously: wait for its preview (reading at once races a busy machine)
+    const preview = await waitForText(page.locator("#import-preview"), /2 changes/);
     expect(preview).toMatch(/HB-7 amine \(hb-7-amine\): replaces the workbook acid–base system/);
     expect(preview).toMatch(/HB-7 free base \(hb-7-free-base\): adds a new substance/);
     expect(await page.locator("#fingerprint").innerText()).toBe(fingerprintBefore); // nothing applied yet

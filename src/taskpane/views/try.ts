@@ -53,6 +53,11 @@ export class TryView {
     this.refresh();
   }
 
+  /** The mixture as entered now (calculated or not): for the Picture view. */
+  mixture(): { rows: TryRow[]; temperature: string } {
+    return { rows: this.rows.map((r) => ({ ...r })), temperature: this.temperature };
+  }
+
   /** After a library change: new names for the list, and the last calculation again. */
   refresh(): void {
     const names = new Set<string>();

@@ -1,0 +1,89 @@
+/**
+ * The values of a formula's names, amounts, temperature and activity arguments (inline or loaded
+ * from the sheet) → the rows, temperature and activity model the pane's mixture reader takes
+ * (tryit.ts). Pairing follows the AQ functions: names and amounts of the same shape, cell by cell,
+ * rows with both cells blank skipped. Pure.
+ */
+import type { ActivityModel } from "../../chem";
+import type { TryRow } from "../tryit";
+import type { CellValue } from "./aq-call";
+
+export interface MixtureSpec {
+  rows: TryRow[];
+  /** °C as text ("" for the default 25 °C), as the try-it panel holds it. */
+  temperature: string;
+  activity: ActivityModel;
+}
+
+export type SpecResult = { ok: true; spec: MixtureSpec } | { ok: false; message: string };
+
+const ACTIVITY: Record<string, ActivityModel> = {
+  davies: "davies",
+  ideal: "ideal",
+  none: "ideal",
+  "debye-huckel": "debye-huckel",
+  "debye-hückel": "debye-huckel",
+  "debye huckel": "debye-huckel",
+  "extended debye-huckel": "debye-huckel",
+};
+
+function blank(v: CellValue | undefined): boolean {
+  return v === null || v === undefined || (typeof v === "string" && v.trim() === "");
+}
+
+function isError(v: CellValue | undefined): v is { error: string } {
+  return typeof v === "object" && v !== null;
+}
+
+/** Excel's Range.values gives error cells as text such as "#N/A": treat those as errors too. */
+function errorText(v: CellValue | undefined): string | null {
+  if (isError(v)) return v.error;
+  if (typeof v === "string" && /^#(NULL!|DIV\/0!|VALUE!|REF!|NAME\?|NUM!|N\/A|SPILL!|CALC!|BUSY!|GETTING_DATA)$/.test(v.trim())) return v.trim();
+  return null;
+}
+
+function shape(v: CellValue[][]): string {
+  return `${v.length}×${v[0]?.length ?? 0}`;
+}
+
+function single(v: CellValue[][] | null, what: string): { ok: true; value: CellValue } | { ok: false; message: string } {
+  if (v === null) return { ok: true, value: null };
+  if (v.length !== 1 || v[0].length !== 1) return { ok: false, message: `the ${what} must be one cell, not ${shape(v)} cells` };
+  const e = errorText(v[0][0]);
+  if (e) return { ok: false, message: `the ${what} cell shows ${e}` };
+  return { ok: true, value: v[0][0] };
+}
+
+export function mixtureFromValues(names: CellValue[][], amounts: CellValue[][], temperature: CellValue[][] | null = null, activity: CellValue[][] | null = null): SpecResult {
+  const rowsN = names.length;
+  const colsN = names[0]?.length ?? 0;
+  if (amounts.length !== rowsN || amounts.some((r) => r.length !== colsN) || names.some((r) => r.length !== colsN)) {
+    return { ok: false, message: `the names are ${shape(names)} cells but the amounts are ${shape(amounts)}: the AQ functions pair them cell by cell` };
+  }
+  const rows: TryRow[] = [];
+  for (let r = 0; r < rowsN; r++) {
+    for (let c = 0; c < colsN; c++) {
+      const n = names[r][c];
+      const a = amounts[r][c];
+      const where = rowsN * colsN > 1 ? ` (item ${r * colsN + c + 1})` : "";
+      const bad = errorText(n) ?? errorText(a);
+      if (bad) return { ok: false, message: `a name or amount cell${where} shows ${bad}` };
+      if (blank(n) && blank(a)) continue;
+      if (typeof n === "boolean" || typeof a === "boolean") return { ok: false, message: `a name or amount${where} is TRUE/FALSE` };
+      rows.push({ name: blank(n) ? "" : String(n).trim(), amount: blank(a) ? "" : String(a).trim() });
+    }
+  }
+  if (rows.length === 0) return { ok: false, message: "the names and amounts are all blank" };
+  const t = single(temperature, "temperature");
+  if (!t.ok) return t;
+  if (typeof t.value === "boolean") return { ok: false, message: "the temperature is TRUE/FALSE" };
+  const m = single(activity, "activity");
+  if (!m.ok) return m;
+  let model: ActivityModel = "davies";
+  if (!blank(m.value)) {
+    const key = String(m.value).trim().toLowerCase();
+    if (!(key in ACTIVITY)) return { ok: false, message: `the activity model '${key}' is not known (davies, ideal or debye-huckel)` };
+    model = ACTIVITY[key];
+  }
+  return { ok: true, spec: { rows, temperature: blank(t.value) ? "" : String(t.value).trim(), activity: model } };
+}
