@@ -81,6 +81,15 @@ export function formatCell(cell: CellResult): string {
   return String(cell);
 }
 
+/**
+ * Text that a spreadsheet would read as a formula when the CSV is opened (=, +, -, @, tab, CR at the
+ * start) is written with a leading apostrophe, so computed text never becomes a live formula.
+ */
+function inert(cell: CellResult): string {
+  const text = formatCell(cell);
+  return typeof cell === "string" && /^[=+\-@\t\r]/.test(text) ? `'${text}` : text;
+}
+
 export function toCsv(values: CellResult[][]): string {
-  return values.map((row) => row.map((c) => quote(formatCell(c))).join(",")).join("\n") + "\n";
+  return values.map((row) => row.map((c) => quote(inert(c))).join(",")).join("\n") + "\n";
 }

@@ -146,3 +146,8 @@ test("the CLI source file is executable through tsx without a build", () => {
   const out = execFileSync(tsx, [cli, "--help"], { cwd: root, encoding: "utf8" });
   expect(out).toMatch(/protolyte eval/);
 });
+
+test("CSV output never turns computed text into a live formula", () => {
+  const { toCsv } = require("../../src/cli/csv") as typeof import("../../src/cli/csv");
+  expect(toCsv([["=1+1", "+SUM(A1)", "@x", "-y", "plain", -0.5]])).toBe("'=1+1,'+SUM(A1),'@x,'-y,plain,-0.5\n");
+});

@@ -13,7 +13,7 @@ function errorOf(call: () => unknown): { code: string; message: string } {
   } catch (e) {
     expect(e).toBeInstanceOf(CustomFunctions.Error);
     const err = e as CustomFunctions.Error;
-    return { code: err.code, message: err.message };
+    return { code: err.code, message: err.message ?? "" };
   }
   throw new Error("expected the call to fail");
 }

@@ -9,6 +9,7 @@ import { badInput, finite, orThrow } from "../errors";
 import { readMixture } from "../mixture";
 import { resolveComponent } from "../substances";
 import { chemOptions } from "./options";
+import { trustIonicStrength } from "./trust";
 
 export function adjust(
   names: Cell,
@@ -25,12 +26,12 @@ export function adjust(
   const component = resolveComponent(text(titrant, "titrant"));
   const options = chemOptions(temperature, activity);
   if (isBlank(titrantConc) && isBlank(volume)) {
-    return finite(orThrow(adjustMixture(mixture, component, target, options)).value, "titrant amount");
+    return finite(trustIonicStrength(orThrow(adjustMixture(mixture, component, target, options)), "the titrant amount").value, "titrant amount");
   }
   if (isBlank(titrantConc)) throw badInput("volume needs titrant_conc: give the stock concentration too, or leave both out for mol per litre");
   if (isBlank(volume)) throw badInput("titrant_conc needs volume: give the batch volume too (the result is then litres of stock), or leave both out for mol per litre");
   const conc = quantity(titrantConc, "titrant_conc", "concentration", { molarMass: component.molarMass });
   const litres = quantity(volume, "volume", "volume");
   const stock = { conc, volume: litres };
-  return finite(orThrow(adjustMixture(mixture, component, target, { ...options, stock })).value, "litres of stock");
+  return finite(trustIonicStrength(orThrow(adjustMixture(mixture, component, target, { ...options, stock })), "the stock volume").value, "litres of stock");
 }

@@ -3,9 +3,10 @@ import type { Cell } from "../args";
 import { finite, orThrow } from "../errors";
 import { readMixture } from "../mixture";
 import { chemOptions } from "./options";
+import { trustIonicStrength } from "./trust";
 
 export function ph(names: Cell, amounts: Cell, temperature: Cell, activity: Cell): number {
   const { prepared } = readMixture(names, amounts);
-  const result = orThrow(prepared.solvePH(chemOptions(temperature, activity)));
+  const result = trustIonicStrength(orThrow(prepared.solvePH(chemOptions(temperature, activity))), "pH");
   return finite(result.pH, "pH");
 }
