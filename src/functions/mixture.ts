@@ -1,77 +1,164 @@
 /**
  * names + amounts ranges → the engine's Mixture, prepared for solving, with a cache.
  *
- * What-if tables call the same function thousands of times with the same or similar mixtures; the
- * resolved names and prepared mixtures are cached by their text and the fingerprint of the constants
- * in effect, so a change to the library never serves a stale entry.
+ * Several functions on one row (PH, BETA, IONIC, SPECIES of the same mixture), or one mixture at
+ * several temperatures, ask for the same mixture again: the prepared mixture is cached under a key
+ * that encodes every cell's type and value and the layout of both ranges, in the cache of the
+ * library object in effect (substances.ts: a change of the constants drops it). A cached entry gives
+ * the same results as a fresh one (the engine starts every solve cold).
+ *
+ * The key is built by hand rather than with JSON.stringify, which is slower here and cannot tell
+ * NaN, ±Infinity, undefined and null apart (all "null") nor -0 from 0.
  */
 import { prepare, type PreparedMixture } from "../chem";
 import type { Component, Mixture } from "../chem/types";
 import { cellsOf, isBlank, position, quantity, shapeOf, text, type Cell } from "./args";
 import { badInput, orThrow } from "./errors";
-import { libraryKey, resolveComponent } from "./substances";
+import { libraryScoped, resolveComponent } from "./substances";
 
 export interface ReadMixture {
   mixture: Mixture;
   prepared: PreparedMixture;
 }
 
-const CACHE_LIMIT = 4096;
-const cache = new Map<string, ReadMixture>();
+/**
+ * Entries kept. Hits come from calls close together (the functions of one row, one mixture at a few
+ * temperatures); a long table of distinct rows never hits, and a large cache then only makes the
+ * garbage collector keep thousands of prepared mixtures alive (measured: scripts/bench.ts part b).
+ */
+export const MIXTURE_CACHE_LIMIT = 256;
+const mixtureCache = libraryScoped(() => new Map<string, ReadMixture>());
 
-function remember(key: string, value: ReadMixture): void {
-  if (cache.size >= CACHE_LIMIT) {
-    const oldest = cache.keys().next().value;
-    if (oldest !== undefined) cache.delete(oldest);
+/**
+ * One cell in the key: a type tag, then the value — numbers ended by ";", strings length-prefixed —
+ * so that no sequence of cells can spell another's key.
+ */
+function cellKey(v: unknown): string | null {
+  switch (typeof v) {
+    case "number":
+      return Object.is(v, -0) ? "n-0;" : `n${v};`;
+    case "string":
+      return `s${v.length}:${v}`;
+    case "boolean":
+      return v ? "T" : "F";
+    case "undefined":
+      return "u";
+    default:
+      return v === null ? "z" : null;
   }
-  cache.set(key, value);
 }
 
-function cacheKey(names: Cell, amounts: Cell): string {
-  return `${libraryKey()}\u0000${JSON.stringify(names)}\u0000${JSON.stringify(amounts)}`;
+/** A range (rows of cells) or a single value → key text, or null for anything else (not cached). */
+function rangeKey(value: Cell): string | null {
+  if (!Array.isArray(value)) {
+    const k = cellKey(value);
+    return k === null ? null : `=${k}`;
+  }
+  let key = `[${value.length}`;
+  for (let r = 0; r < value.length; r++) {
+    const row: unknown = value[r];
+    if (!Array.isArray(row)) return null;
+    key += `|${row.length}`;
+    for (let c = 0; c < row.length; c++) {
+      const k = cellKey(row[c]);
+      if (k === null) return null;
+      key += k;
+    }
+  }
+  return key;
+}
+
+/** The cache key of a names/amounts pair, or null when it should not be cached. */
+export function mixtureKey(names: Cell, amounts: Cell): string | null {
+  const n = rangeKey(names);
+  if (n === null) return null;
+  const a = rangeKey(amounts);
+  return a === null ? null : `${n}\u0000${a}`;
+}
+
+/** True when a range is rows of cells that all have the same length (what a sheet range is). */
+function rectangular(value: Cell): value is unknown[][] {
+  if (!Array.isArray(value) || value.length === 0) return false;
+  const first: unknown = value[0];
+  if (!Array.isArray(first)) return false;
+  for (let r = 1; r < value.length; r++) {
+    const row: unknown = value[r];
+    if (!Array.isArray(row) || row.length !== first.length) return false;
+  }
+  return true;
+}
+
+/** One name/amount pair, `where` built only when a message needs it. */
+function readPair(
+  entries: { component: Component; conc: number }[],
+  nameCell: Cell,
+  amount: Cell,
+  where: () => string,
+): void {
+  if (isBlank(nameCell)) {
+    if (!isBlank(amount) && amount !== 0) throw badInput(`amount ${String(amount)}${where()} has no substance name beside it`);
+    return;
+  }
+  const name = typeof nameCell === "string" ? nameCell.trim() : text(nameCell, `name${where()}`);
+  const component = resolveComponent(name);
+  if (isBlank(amount)) throw badInput(`no amount for '${name}'${where()}`);
+  const conc =
+    typeof amount === "number" && Number.isFinite(amount) && amount >= 0
+      ? amount // what quantity() returns for a plain non-negative number, without building its messages
+      : quantity(amount, `amount of '${name}'${where()}`, "concentration", { molarMass: component.molarMass });
+  if (conc < 0) throw badInput(`amount of '${name}'${where()} is negative (${conc} mol/L)`);
+  entries.push({ component, conc });
 }
 
 /** Pairs names with amounts cell by cell; blank rows are skipped, half-blank rows are errors. */
 export function readEntries(names: Cell, amounts: Cell): { component: Component; conc: number }[] {
-  const nShape = shapeOf(names);
-  const aShape = shapeOf(amounts);
-  if (nShape[0] !== aShape[0] || nShape[1] !== aShape[1]) {
-    throw badInput(`names is ${nShape[0]}×${nShape[1]} cells but amounts is ${aShape[0]}×${aShape[1]}: give one amount per name`);
-  }
-  const nameCells = cellsOf(names);
-  const amountCells = cellsOf(amounts);
   const entries: { component: Component; conc: number }[] = [];
-  nameCells.forEach((cell, i) => {
-    const amount = amountCells[i]?.value;
-    const where = position(cell.row, cell.col, nShape);
-    if (isBlank(cell.value)) {
-      if (!isBlank(amount) && amount !== 0) throw badInput(`amount ${String(amount)}${where} has no substance name beside it`);
-      return;
+  if (rectangular(names) && rectangular(amounts)) {
+    // The usual case, two sheet ranges: read in place, no per-cell objects.
+    const rows = names.length;
+    const cols = names[0].length;
+    if (amounts.length !== rows || amounts[0].length !== cols) {
+      throw badInput(`names is ${rows}×${cols} cells but amounts is ${amounts.length}×${amounts[0].length}: give one amount per name`);
     }
-    const name = text(cell.value, `name${where}`);
-    const component = resolveComponent(name);
-    if (isBlank(amount)) throw badInput(`no amount for '${name}'${where}`);
-    const conc = quantity(amount, `amount of '${name}'${where}`, "concentration", { molarMass: component.molarMass });
-    if (conc < 0) throw badInput(`amount of '${name}'${where} is negative (${conc} mol/L)`);
-    entries.push({ component, conc });
-  });
+    const shape: [number, number] = [rows, cols];
+    for (let r = 0; r < rows; r++) {
+      const nRow = names[r];
+      const aRow = amounts[r];
+      for (let c = 0; c < cols; c++) readPair(entries, nRow[c], aRow[c], () => position(r, c, shape));
+    }
+  } else {
+    const nShape = shapeOf(names);
+    const aShape = shapeOf(amounts);
+    if (nShape[0] !== aShape[0] || nShape[1] !== aShape[1]) {
+      throw badInput(`names is ${nShape[0]}×${nShape[1]} cells but amounts is ${aShape[0]}×${aShape[1]}: give one amount per name`);
+    }
+    const nameCells = cellsOf(names);
+    const amountCells = cellsOf(amounts);
+    nameCells.forEach((cell, i) => readPair(entries, cell.value, amountCells[i]?.value, () => position(cell.row, cell.col, nShape)));
+  }
   if (entries.length === 0) throw badInput("the mixture is empty: give at least one substance name with its amount");
   return entries;
 }
 
+function read(names: Cell, amounts: Cell): ReadMixture {
+  const mixture = readEntries(names, amounts);
+  return { mixture, prepared: orThrow(prepare(mixture)) };
+}
+
 /** The mixture of a names/amounts pair, validated and prepared for solving (cached). */
 export function readMixture(names: Cell, amounts: Cell): ReadMixture {
-  const key = cacheKey(names, amounts);
+  const key = mixtureKey(names, amounts);
+  if (key === null) return read(names, amounts);
+  const cache = mixtureCache();
   const hit = cache.get(key);
   if (hit !== undefined) return hit;
-  const mixture = readEntries(names, amounts);
-  const prepared = orThrow(prepare(mixture));
-  const value = { mixture, prepared };
-  remember(key, value);
+  const value = read(names, amounts);
+  if (cache.size >= MIXTURE_CACHE_LIMIT) cache.clear();
+  cache.set(key, value);
   return value;
 }
 
-/** For tests and the task pane after a library change. */
+/** Empties the cache of the library in effect (tests; a library change needs no call). */
 export function clearMixtureCache(): void {
-  cache.clear();
+  mixtureCache().clear();
 }

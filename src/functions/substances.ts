@@ -1,10 +1,14 @@
 /**
  * Names typed in cells → the engine's objects, through the constants library in effect (built-in ←
- * workbook ← personal, managed by the task pane). The library's fingerprint keys every cache in the
- * functions layer, so a change to the constants is never answered from stale data.
+ * workbook ← personal, managed by the task pane).
+ *
+ * Caches in the functions layer belong to the library object in effect (libraryScoped): a library is
+ * immutable, and every change of the constants publishes a new library object, so a change is never
+ * answered from stale data — and checking which library is in effect costs one comparison, not a
+ * fingerprint.
  */
 import type { AcidBaseSystem, Component } from "../chem/types";
-import { getActiveLibrary } from "../library";
+import { getActiveLibrary, type Library } from "../library";
 import { badInput } from "./errors";
 
 /** The fingerprint of the constants in effect ("PL-1.0.0-3fa9c21b07"). */
@@ -12,11 +16,39 @@ export function libraryKey(): string {
   return getActiveLibrary().fingerprint();
 }
 
-/** A substance by any alias, or #VALUE! naming the closest known substances. */
+/**
+ * A value derived from the library in effect: `make()` runs again the first time it is asked for
+ * after the active library object has changed.
+ */
+export function libraryScoped<T>(make: () => T): () => T {
+  let owner: Library | null = null;
+  let value: T | undefined;
+  return () => {
+    const library = getActiveLibrary();
+    if (library !== owner || value === undefined) {
+      value = make();
+      owner = library;
+    }
+    return value;
+  };
+}
+
+/** Resolved names (the component, or the failure message with its suggestions) per library. */
+const NAME_CACHE_LIMIT = 2048;
+const nameCache = libraryScoped(() => new Map<string, Component | string>());
+
+/** A substance by any alias, or #VALUE! naming the closest known substances. Cached per library. */
 export function resolveComponent(name: string): Component {
-  const found = getActiveLibrary().resolve(name);
-  if (!found.ok) throw badInput(found.message);
-  return found.component;
+  const cache = nameCache();
+  let found = cache.get(name);
+  if (found === undefined) {
+    const r = getActiveLibrary().resolve(name);
+    found = r.ok ? r.component : r.message;
+    if (cache.size >= NAME_CACHE_LIMIT) cache.clear();
+    cache.set(name, found);
+  }
+  if (typeof found === "string") throw badInput(found);
+  return found;
 }
 
 /**
