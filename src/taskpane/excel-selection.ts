@@ -37,7 +37,8 @@ interface Pending {
   arg: ArgName;
   source: ArgSource;
   range?: Excel.Range;
-  sheet?: Excel.Worksheet;
+  /** A sheet named in the formula (getItemOrNullObject: its isNullObject is read after sync). */
+  namedSheet?: Excel.Worksheet;
   item?: Excel.NamedItem;
 }
 
@@ -56,7 +57,7 @@ function loaded(p: Pending): Loaded {
     case "unsupported":
       return { ok: false, message: `${label.replace(/ \(\)$/, "")} cannot be used: ${s.why}` };
     case "ref":
-      if (p.sheet?.isNullObject) return { ok: false, message: `${label} names a sheet '${s.sheet}' that the workbook does not have` };
+      if (p.namedSheet?.isNullObject) return { ok: false, message: `${label} names a sheet '${s.sheet}' that the workbook does not have` };
       return { ok: true, values: asCells(p.range!.values) };
     case "name": {
       const item = p.item!;
@@ -100,8 +101,8 @@ export async function readSelectedMixture(excel: SelectionExcel): Promise<Select
         const source = call[arg];
         const p: Pending = { arg, source };
         if (source.kind === "ref") {
-          p.sheet = source.sheet === null ? home : ctx.workbook.worksheets.getItemOrNullObject(source.sheet);
-          p.range = p.sheet.getRange(source.address);
+          if (source.sheet !== null) p.namedSheet = ctx.workbook.worksheets.getItemOrNullObject(source.sheet);
+          p.range = (p.namedSheet ?? home).getRange(source.address);
           p.range.load("values");
         } else if (source.kind === "name") {
           p.item = source.sheet === null ? ctx.workbook.names.getItemOrNullObject(source.name) : ctx.workbook.worksheets.getItem(source.sheet).names.getItemOrNullObject(source.name);

@@ -11,7 +11,8 @@
 import * as fs from "fs";
 import * as path from "path";
 import type { Locator, Page } from "playwright-core";
-import { launch, routeOffice, snapshotDist, OFFICE_CDN, ROOT, type Launched } from "./support/browser";
+import { launch, routeOffice, snapshotDist, ROOT, type Launched } from "./support/browser";
+import { open, waitForText, watch, type PageWatch } from "./support/page-watch";
 import { serveDirectory, type StaticServer } from "./support/static-server";
 
 jest.setTimeout(120000);
@@ -19,74 +20,12 @@ jest.setTimeout(120000);
 const ARTIFACTS = path.join(ROOT, "test-artifacts");
 const WORKBOOK_KEY = "protolyte.workbook-library.browser-page";
 
-interface PageWatch {
-  errors: string[];
-  csp: string[];
-  requests: string[];
-}
-
-/**
- * office.js (from the CDN) adds, 3 s after loading, a hidden iframe to Microsoft's telemetry proxy
- * with a style attribute. The pane's policy refuses both on purpose (the pane does not need
- * telemetry); these two violations, raised by office.js's own script, are the only ones expected.
- */
-function expectedOfficeViolation(directive: string, blocked: string, source: string): boolean {
-  // a refused frame reports no source file; its address is reported as an origin
-  if (directive === "frame-src") return blocked === "https://telemetryservice.firstpartyapps.oaspapps.com";
-  return directive === "style-src-attr" && blocked === "inline" && source.startsWith(OFFICE_CDN);
-}
-
-/** Page errors, CSP violations and console errors, plus a flag that any injected script would set. */
-async function watch(page: Page, requests: string[]): Promise<PageWatch> {
-  const w: PageWatch = { errors: [], csp: [], requests };
-  page.on("pageerror", (e) => w.errors.push(`pageerror: ${e.message}`));
-  page.on("console", (m) => {
-    const text = m.text();
-    const from = m.location().url ?? "";
-    if (/Content Security Policy/i.test(text)) {
-      const office = from.startsWith("https://appsforoffice.microsoft.com/");
-      if (!(office && (/Framing 'https:\/\/telemetryservice\.firstpartyapps\.oaspapps\.com\/'/.test(text) || /^Applying inline style/.test(text)))) w.csp.push(`${text} (${from})`);
-    } else if (m.type() === "error" && !/Failed to load resource/.test(text)) w.errors.push(`console: ${text}`);
-  });
-  await page.exposeFunction("__expectedOfficeViolation", expectedOfficeViolation);
-  await page.addInitScript(() => {
-    const g = window as unknown as { __injected: string[]; __csp: string[]; __expectedOfficeViolation(d: string, b: string, s: string): Promise<boolean> };
-    g.__injected = [];
-    g.__csp = [];
-    document.addEventListener("securitypolicyviolation", (e) => {
-      const line = `${e.violatedDirective} ${e.blockedURI} ${e.sourceFile}:${e.lineNumber}`;
-      void g.__expectedOfficeViolation(e.violatedDirective, e.blockedURI, e.sourceFile).then((expected) => {
-        if (!expected) g.__csp.push(line);
-      });
-    });
-  });
-  return w;
-}
-
-/** Poll a locator's text until it matches (actions are asynchronous: saves go through storage). */
-async function waitForText(loc: Locator, expected: RegExp | string | ((text: string) => boolean), timeout = 8000): Promise<string> {
-  const ok = (t: string) => (typeof expected === "string" ? t === expected : typeof expected === "function" ? expected(t) : expected.test(t));
-  const end = Date.now() + timeout;
-  let last = "";
-  for (;;) {
-    last = (await loc.innerText({ timeout: 1000 }).catch(() => "")).trim();
-    if (ok(last)) return last;
-    if (Date.now() > end) throw new Error(`expected ${String(expected)}, found: ${JSON.stringify(last.slice(0, 600))}`);
-    await new Promise((r) => setTimeout(r, 50));
-  }
-}
-
 async function attr(loc: Locator, name: string): Promise<string | null> {
   return loc.getAttribute(name, { timeout: 5000 });
 }
 
 async function focused(loc: Locator): Promise<boolean> {
   return loc.evaluate((el) => el === document.activeElement);
-}
-
-async function open(page: Page, url: string): Promise<void> {
-  await page.goto(`${url}/taskpane.html`);
-  await page.waitForSelector("body[data-ready=true]", { timeout: 20000 });
 }
 
 async function tab(page: Page, name: string): Promise<void> {

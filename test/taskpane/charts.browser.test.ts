@@ -1,0 +1,250 @@
+/**
+ * The Picture view in headless Chromium (Debian's /usr/bin/chromium through playwright-core),
+ * outside Office: a phosphate mixture entered in Try it, drawn as a speciation diagram and a
+ * titration curve at the pane's width (350 px). Checks what is drawn (a line per form, axes with
+ * units, the mixture's pH, equivalence markers), that the layout holds at that width in the real
+ * browser (nothing overlapping or cut off), the text fallbacks, the settings, and that nothing breaks
+ * the Content-Security-Policy. Screenshots: test-artifacts/pane-speciation.png, pane-curve.png.
+ */
+import * as fs from "fs";
+import * as path from "path";
+import type { Locator, Page } from "playwright-core";
+import { launch, routeOffice, snapshotDist, ROOT, type Launched } from "./support/browser";
+import { drainProblems, open, waitForText, watch, type PageWatch } from "./support/page-watch";
+import { serveDirectory, type StaticServer } from "./support/static-server";
+
+jest.setTimeout(120000);
+
+const ARTIFACTS = path.join(ROOT, "test-artifacts");
+const PANE_WIDTH = 350;
+
+interface Box {
+  x: number;
+  y: number;
+  width: number;
+  height: number;
+}
+
+/** Bounding boxes (page pixels) of the elements a locator matches. */
+async function boxes(loc: Locator): Promise<(Box & { text: string })[]> {
+  return loc.evaluateAll((els) =>
+    els.map((e) => {
+      const r = e.getBoundingClientRect();
+      return { x: r.x, y: r.y, width: r.width, height: r.height, text: e.textContent ?? "" };
+    }),
+  );
+}
+
+function overlaps(a: Box, b: Box): boolean {
+  return a.x < b.x + b.width && b.x < a.x + a.width && a.y < b.y + b.height && b.y < a.y + a.height;
+}
+
+/** No two boxes overlap, and each lies inside the frame (with a pixel of slack for antialiasing). */
+function expectApartAndInside(label: string, items: (Box & { text: string })[], frame: Box): void {
+  for (let i = 0; i < items.length; i++) {
+    const a = items[i];
+    const inside = a.x >= frame.x - 1 && a.y >= frame.y - 1 && a.x + a.width <= frame.x + frame.width + 1 && a.y + a.height <= frame.y + frame.height + 1;
+    expect({ label, text: a.text, inside }).toEqual({ label, text: a.text, inside: true });
+    for (let j = i + 1; j < items.length; j++) {
+      expect({ label, pair: [a.text, items[j].text], overlap: overlaps(a, items[j]) }).toEqual({ label, pair: [a.text, items[j].text], overlap: false });
+    }
+  }
+}
+
+/** Poll an SVG element's text (SVG elements have no innerText) until it is `expected`. */
+async function waitForContent(loc: Locator, expected: string, timeout = 8000): Promise<void> {
+  const end = Date.now() + timeout;
+  let last: string | null = null;
+  while ((last = await loc.textContent({ timeout: 1000 }).catch(() => null)) !== expected) {
+    if (Date.now() > end) throw new Error(`expected ${JSON.stringify(expected)}, found ${JSON.stringify(last)}`);
+    await new Promise((r) => setTimeout(r, 50));
+  }
+}
+
+async function fillTry(page: Page, rows: [string, string][], temperature = "25"): Promise<void> {
+  await page.getByRole("tab", { name: "Try it" }).click();
+  while ((await page.locator(".try-name").count()) < rows.length) await page.click("#try-add-row");
+  for (let i = 0; i < rows.length; i++) {
+    await page.locator(".try-name").nth(i).fill(rows[i][0]);
+    await page.locator(".try-amount").nth(i).fill(rows[i][1]);
+  }
+  await page.fill("#try-temp", temperature);
+}
+
+describe("Picture view in Chromium at the pane's width", () => {
+  let server: StaticServer;
+  let dist: ReturnType<typeof snapshotDist>;
+  let browser: Launched;
+  let page: Page;
+  let w: PageWatch;
+
+  beforeAll(async () => {
+    dist = snapshotDist();
+    fs.mkdirSync(ARTIFACTS, { recursive: true });
+    server = await serveDirectory(dist.dir);
+    browser = await launch({ deviceScaleFactor: 2 });
+    const requests: string[] = [];
+    await routeOffice(browser.context, "npm", requests);
+    page = browser.context.pages()[0] ?? (await browser.context.newPage());
+    await page.setViewportSize({ width: PANE_WIDTH, height: 900 });
+    w = await watch(page, requests);
+    await open(page, server.url);
+  });
+
+  afterAll(async () => {
+    await browser?.close();
+    await server?.close();
+    dist?.remove();
+  });
+
+  afterEach(async () => {
+    expect(await drainProblems(page, w)).toEqual({ injected: [], csp: [], consoleCsp: [], errors: [] });
+  });
+
+  test("with no mixture yet, the view says where one comes from", async () => {
+    await page.getByRole("tab", { name: "Picture" }).click();
+    await waitForText(page.locator("#picture-source"), "No mixture yet: enter one in Try it.");
+    expect(await page.locator("#panel-picture svg").count()).toBe(0);
+  });
+
+  test("a phosphate mixture from Try it: one line per form, labelled axes, the mixture's pH, title, description", async () => {
+    await fillTry(page, [
+      ["sodium dihydrogen phosphate", "10 mM"],
+      ["disodium hydrogen phosphate", "10 mM"],
+    ]);
+    await page.click("#try-run");
+    const tryPH = Number(await page.locator("#try-ph").innerText());
+    await page.getByRole("tab", { name: "Picture" }).click();
+    await waitForText(page.locator("#picture-source"), /^From the Try it mixture: 10 mM sodium dihydrogen phosphate \+ 10 mM disodium hydrogen phosphate, 25 °C\.$/);
+    expect(Number(await page.locator("#picture-ph").innerText())).toBe(tryPH);
+    const svg = page.locator("#picture-speciation svg.speciation");
+    expect(await svg.count()).toBe(1);
+    expect(await svg.getAttribute("data-system")).toBe("phosphate");
+    const species = await svg.locator("path.species-line").evaluateAll((ps) => ps.map((p) => ({ name: p.getAttribute("data-species"), length: (p as SVGPathElement).getTotalLength() })));
+    expect(species.map((s) => s.name)).toEqual(["H3PO4", "H2PO4-", "HPO4^2-", "PO4^3-"]);
+    for (const s of species) expect(s.length).toBeGreaterThan(100); // drawn, not empty
+    const titles = await svg.locator(".axis-title").allTextContents();
+    expect(titles).toEqual(["pH", "% of phosphate"]);
+    expect(await svg.evaluate((e) => [e.namespaceURI, e.firstElementChild?.tagName, e.firstElementChild?.nextElementSibling?.tagName])).toEqual(["http://www.w3.org/2000/svg", "title", "desc"]);
+    expect(await svg.getAttribute("role")).toBe("img");
+    expect(await svg.getAttribute("aria-label")).toMatch(new RegExp(`^Forms of phosphate from pH 0 to 14 at 25 °C.*At the mixture's pH ${tryPH.toFixed(2).replace(".", "\\.")}:`));
+    // the marker sits at the mixture's pH on the axis: between the ticks 6 and 8, in proportion
+    const tick = async (label: string) => (await boxes(svg.locator(".x-axis text", { hasText: new RegExp(`^${label}$`) })))[0];
+    const [t6, t8] = [await tick("6"), await tick("8")];
+    const line = (await boxes(svg.locator(".mixture-ph line")))[0];
+    const expectedX = t6.x + t6.width / 2 + ((t8.x + t8.width / 2 - (t6.x + t6.width / 2)) * (tryPH - 6)) / 2;
+    expect(Math.abs(line.x + line.width / 2 - expectedX)).toBeLessThan(1.5);
+  });
+
+  test("the speciation figure fits 350 px: no overflow, tick labels, legend and marker label apart and inside", async () => {
+    const fig = page.locator("#picture-speciation figure").first();
+    const svg = fig.locator("svg");
+    const frame = (await boxes(svg))[0];
+    expect(frame.x).toBeGreaterThanOrEqual(0);
+    expect(frame.x + frame.width).toBeLessThanOrEqual(PANE_WIDTH);
+    expect(frame.width).toBeGreaterThan(300);
+    expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(PANE_WIDTH);
+    expectApartAndInside("x ticks", await boxes(svg.locator(".x-axis text")), frame);
+    expectApartAndInside("y ticks", await boxes(svg.locator(".y-axis text")), frame);
+    expectApartAndInside("legend", await boxes(svg.locator(".legend-item")), frame);
+    expectApartAndInside("marker label", await boxes(svg.locator(".mixture-ph text")), frame);
+    // the legend is below the plot, and readable (text at least 10 px high)
+    const plotBottom = Math.max(...(await boxes(svg.locator(".x-axis .axis-title"))).map((b) => b.y + b.height));
+    for (const b of await boxes(svg.locator(".legend-item text"))) {
+      expect(b.y).toBeGreaterThanOrEqual(plotBottom);
+      expect(b.height).toBeGreaterThanOrEqual(10);
+    }
+    await fig.screenshot({ path: path.join(ARTIFACTS, "pane-speciation.png") });
+  });
+
+  test("the titration curve: a line, an equivalence marker at 1.00 mL of 0.1 M NaOH, axes with units, fitting the pane", async () => {
+    const svg = page.locator("#picture-curve svg.titration");
+    expect(await svg.getAttribute("data-titrant")).toBe("NaOH");
+    expect(await svg.locator("path.curve-line").count()).toBe(1);
+    expect(await svg.locator("path.curve-line").evaluate((p) => (p as SVGPathElement).getTotalLength())).toBeGreaterThan(200);
+    const markers = svg.locator(".eq-marker");
+    expect(await markers.count()).toBeGreaterThanOrEqual(1);
+    expect(Number(await markers.first().getAttribute("data-ml"))).toBeCloseTo(1.0, 2);
+    expect(await svg.locator(".axis-title").allTextContents()).toEqual(["mL of 0.1 M NaOH added to 10 mL", "pH"]);
+    expect(await svg.getAttribute("aria-label")).toMatch(/Equivalence point at 1\.00 mL \(pH 9\.\d\d\)\.$/);
+    await waitForText(page.locator("#picture-titrant-reason"), /^NaOH: from pH 6\.96 the mixture takes about as much strong base/);
+    const frame = (await boxes(svg))[0];
+    expect(frame.x + frame.width).toBeLessThanOrEqual(PANE_WIDTH);
+    expectApartAndInside("x ticks", await boxes(svg.locator(".x-axis text")), frame);
+    expectApartAndInside("y ticks", await boxes(svg.locator(".y-axis text")), frame);
+    expectApartAndInside("legend", await boxes(svg.locator(".legend-item")), frame);
+    // the ring is on the curve: its centre within a pixel of the path's points near it
+    const onCurve = await svg.evaluate((s) => {
+      const ring = s.querySelector(".eq-marker circle") as SVGCircleElement;
+      const path = s.querySelector("path.curve-line") as SVGPathElement;
+      const cx = ring.cx.baseVal.value;
+      const cy = ring.cy.baseVal.value;
+      let best = Infinity;
+      const n = path.getTotalLength();
+      for (let l = 0; l <= n; l += 0.25) {
+        const p = path.getPointAtLength(l);
+        best = Math.min(best, Math.hypot(p.x - cx, p.y - cy));
+      }
+      return best;
+    });
+    expect(onCurve).toBeLessThan(1.5);
+    await page.locator("#picture-curve figure").first().screenshot({ path: path.join(ARTIFACTS, "pane-curve.png") });
+  });
+
+  test("text fallbacks: the numbers behind each picture", async () => {
+    await page.locator("#picture-speciation details summary").first().click();
+    const spec = await page.locator("#picture-speciation table.numbers").first().innerText();
+    expect(spec).toMatch(/H₂PO₄⁻\s+50 %/);
+    expect(spec).toMatch(/HPO₄²⁻\s+50 %/);
+    expect(spec).toMatch(/H₂PO₄⁻ = HPO₄²⁻\s+pH 6\.96/);
+    await page.locator("#picture-curve details summary").first().click();
+    const curve = await page.locator("#picture-curve table.numbers").innerText();
+    expect(curve).toMatch(/1\.00\s+9\.\d\d\s+equivalence/);
+    expect(curve.split("\n").length).toBeGreaterThan(8);
+  });
+
+  test("settings: HCl as titrant, a weaker stock doubles the volume, a bad stock is reported", async () => {
+    await page.selectOption("#picture-titrant", "HCl");
+    const svg = page.locator("#picture-curve svg.titration");
+    await waitForText(page.locator("#picture-titrant-reason"), "HCl, as chosen.");
+    expect(await svg.getAttribute("data-titrant")).toBe("HCl");
+    expect(Number(await svg.locator(".eq-marker").first().getAttribute("data-ph"))).toBeLessThan(5);
+    await page.fill("#picture-stock", "50 mM");
+    await page.click("#picture-redraw");
+    await waitForContent(page.locator("#picture-curve .axis-title").first(), "mL of 50 mM HCl added to 10 mL");
+    expect(Number(await svg.locator(".eq-marker").first().getAttribute("data-ml"))).toBeCloseTo(2.0, 2);
+    await page.fill("#picture-stock", "plenty");
+    await page.click("#picture-redraw");
+    await waitForText(page.locator("#picture-curve"), /No titration curve: titrant stock: Cannot read "plenty"/);
+    await page.fill("#picture-stock", "0.1 M");
+    await page.selectOption("#picture-titrant", "auto");
+    await waitForContent(page.locator("#picture-curve .axis-title").first(), "mL of 0.1 M NaOH added to 10 mL");
+  });
+
+  test("a mixture of two systems gives two diagrams; an unknown name gives the reason and no picture", async () => {
+    await fillTry(page, [
+      ["citric acid", "10 mM"],
+      ["disodium hydrogen phosphate", "20 mM"],
+    ], "37");
+    await page.getByRole("tab", { name: "Picture" }).click();
+    await waitForText(page.locator("#picture-source"), /37 °C\.$/);
+    expect(await page.locator("#picture-speciation svg.speciation").evaluateAll((s) => s.map((e) => e.getAttribute("data-system")))).toEqual(["citrate", "phosphate"]);
+    await fillTry(page, [["phosphoric acid", "10 mM"], ["unobtainium", "1 mM"]]);
+    await page.getByRole("tab", { name: "Picture" }).click();
+    await waitForText(page.locator("#picture-facts"), /No picture:.*row 2 \(name\)/s);
+    expect(await page.locator("#panel-picture svg").count()).toBe(0);
+    await fillTry(page, [["phosphoric acid", "10 mM"], ["", ""]]);
+    await page.getByRole("tab", { name: "Picture" }).click();
+    expect(await page.locator("#picture-curve .eq-marker").count()).toBe(2);
+    await page.screenshot({ path: path.join(ARTIFACTS, "pane-picture.png"), fullPage: true });
+  });
+
+  test("the Picture tab is reached from the keyboard and leaves its panel when another tab opens", async () => {
+    await page.getByRole("tab", { name: "Try it" }).focus();
+    await page.keyboard.press("ArrowRight");
+    expect(await page.getByRole("tab", { name: "Picture" }).getAttribute("aria-selected")).toBe("true");
+    expect(await page.locator("#panel-picture").isVisible()).toBe(true);
+    await page.keyboard.press("ArrowRight");
+    expect(await page.locator("#panel-picture").isVisible()).toBe(false);
+  });
+});
