@@ -5,12 +5,19 @@
  * units, the mixture's pH, equivalence markers), that the layout holds at that width in the real
  * browser (nothing overlapping or cut off), the text fallbacks, the settings, and that nothing breaks
  * the Content-Security-Policy. Screenshots: test-artifacts/pane-speciation.png, pane-curve.png.
+ *
+ * Then the same pane "inside Excel": office.js is replaced by a stand-in whose Excel is the hand
+ * mock of the unit tests (support/fake-office.ts), to see the view follow the selected cell's AQ
+ * formula, fall back to Try it, and stop following when another tab opens. What Excel returns is
+ * the mock's assumption.
  */
 import * as fs from "fs";
 import * as path from "path";
 import type { Locator, Page } from "playwright-core";
 import { launch, routeOffice, snapshotDist, ROOT, type Launched } from "./support/browser";
 import { drainProblems, open, waitForText, watch, type PageWatch } from "./support/page-watch";
+import type { WorkbookModel } from "./support/fake-excel-workbook";
+import { routeFakeOffice } from "./support/fake-office";
 import { serveDirectory, type StaticServer } from "./support/static-server";
 
 jest.setTimeout(120000);
@@ -246,5 +253,113 @@ describe("Picture view in Chromium at the pane's width", () => {
     expect(await page.locator("#panel-picture").isVisible()).toBe(true);
     await page.keyboard.press("ArrowRight");
     expect(await page.locator("#panel-picture").isVisible()).toBe(false);
+  });
+});
+
+const WORKBOOK: WorkbookModel = {
+  sheets: [
+    {
+      name: "Sheet1",
+      cells: {
+        A1: { value: "substance" },
+        A2: { value: "sodium dihydrogen phosphate" },
+        A3: { value: "disodium hydrogen phosphate" },
+        B2: { value: 0.01 },
+        B3: { value: "10 mM" },
+        C1: { value: 25 },
+        D2: { formula: "=AQ.PH(A2:A3,B2:B3,C1)", value: 6.96 },
+        D3: { formula: "=ROUND(AQ.BETA('Acetate buffer'!$A$2:$A$3,'Acetate buffer'!$B$2:$B$3,37),4)", value: 0.05 },
+        D4: { value: 7 },
+      },
+    },
+    { name: "Acetate buffer", cells: { A2: { value: "acetic acid" }, A3: { value: "sodium acetate" }, B2: { value: 0.1 }, B3: { value: 0.1 } } },
+  ],
+  active: { sheet: "Sheet1", cell: "D2" },
+};
+
+describe("Picture view inside Excel (a stand-in office.js over the hand mock of Excel)", () => {
+  let server: StaticServer;
+  let dist: ReturnType<typeof snapshotDist>;
+  let browser: Launched;
+  let page: Page;
+  let w: PageWatch;
+
+  const fakeExcel = <T>(fn: string, ...args: unknown[]): Promise<T> =>
+    page.evaluate(([f, a]) => {
+      const x = (window as unknown as { __fakeExcel: Record<string, (...v: unknown[]) => unknown> }).__fakeExcel;
+      return x[f as string](...(a as unknown[])) as T;
+    }, [fn, args] as const);
+  const reads = () => page.evaluate(() => (window as unknown as { __fakeExcel: { activeCellReads: number } }).__fakeExcel.activeCellReads);
+
+  beforeAll(async () => {
+    dist = snapshotDist();
+    server = await serveDirectory(dist.dir);
+    browser = await launch({ deviceScaleFactor: 2 });
+    const requests: string[] = [];
+    await routeFakeOffice(browser.context, WORKBOOK, requests);
+    page = browser.context.pages()[0] ?? (await browser.context.newPage());
+    await page.setViewportSize({ width: PANE_WIDTH, height: 900 });
+    w = await watch(page, requests);
+    await open(page, server.url);
+  });
+
+  afterAll(async () => {
+    await browser?.close();
+    await server?.close();
+    dist?.remove();
+  });
+
+  afterEach(async () => {
+    expect(await drainProblems(page, w)).toEqual({ injected: [], csp: [], consoleCsp: [], errors: [] });
+  });
+
+  test("the pane knows it is in Excel, and follows nothing until the Picture tab opens", async () => {
+    await waitForText(page.locator("#where"), /^In Excel\./);
+    expect(await fakeExcel<number>("handlerCount")).toBe(0);
+    expect(await reads()).toBe(0);
+  });
+
+  test("opening the Picture tab reads the selected cell's formula and draws its mixture", async () => {
+    await page.getByRole("tab", { name: "Picture" }).click();
+    await waitForText(page.locator("#picture-source"), "From the selected cell Sheet1!D2: =AQ.PH(A2:A3,B2:B3,C1)");
+    expect(await page.locator("#picture-speciation svg.speciation").getAttribute("data-system")).toBe("phosphate");
+    expect(await page.locator("#picture-ph").innerText()).toBe("6.96");
+    expect(await fakeExcel<number>("handlerCount")).toBe(2); // worksheets.onSelectionChanged and onActivated
+    await page.locator("#panel-picture").screenshot({ path: path.join(ARTIFACTS, "pane-excel-selection.png") });
+  });
+
+  test("selecting another AQ cell redraws with its mixture: ranges on another sheet, the temperature inline", async () => {
+    await fakeExcel("select", "Sheet1", "D3");
+    await fakeExcel("fireSelectionChanged");
+    await waitForText(page.locator("#picture-source"), "From the selected cell Sheet1!D3: =ROUND(AQ.BETA('Acetate buffer'!$A$2:$A$3,'Acetate buffer'!$B$2:$B$3,37),4)");
+    expect(await page.locator("#picture-speciation svg.speciation").getAttribute("data-system")).toBe("acetate");
+    await waitForText(page.locator("#picture-facts"), /^pH 4\.\d\d · 37 °C/);
+  });
+
+  test("a cell without an AQ formula: the reason, then the Try it mixture", async () => {
+    await fakeExcel("select", "Sheet1", "D4");
+    await fakeExcel("fireSelectionChanged");
+    await waitForText(page.locator("#picture-source"), /The selected cell Sheet1!D4: the cell holds a value, not a formula\.\s+Showing the Try it mixture instead\.\s+No mixture yet: enter one in Try it\./);
+    await fillTry(page, [["Tris", "20 mM"], ["Tris HCl", "20 mM"]]);
+    await page.getByRole("tab", { name: "Picture" }).click();
+    await waitForText(page.locator("#picture-source"), /From the Try it mixture: 20 mM Tris \+ 20 mM Tris HCl, 25 °C\.$/);
+    expect(await page.locator("#picture-speciation svg.speciation").getAttribute("data-system")).toBe("tris");
+  });
+
+  test("leaving the tab removes the handlers: selection changes are no longer read; coming back reads again", async () => {
+    await page.getByRole("tab", { name: "Browse" }).click();
+    for (let i = 0; (await fakeExcel<number>("handlerCount")) !== 0; i++) {
+      if (i > 100) throw new Error("the selection handlers were not removed");
+      await new Promise((r) => setTimeout(r, 20));
+    }
+    const before = await reads();
+    await fakeExcel("select", "Sheet1", "D2");
+    await fakeExcel("fireSelectionChanged");
+    await new Promise((r) => setTimeout(r, 400));
+    expect(await reads()).toBe(before);
+    await page.getByRole("tab", { name: "Picture" }).click();
+    await waitForText(page.locator("#picture-source"), "From the selected cell Sheet1!D2: =AQ.PH(A2:A3,B2:B3,C1)");
+    expect(await fakeExcel<number>("handlerCount")).toBe(2);
+    expect(await reads()).toBe(before + 1);
   });
 });

@@ -4,6 +4,9 @@
  * synced throws; getItem of a missing sheet fails at sync while getItemOrNullObject gives a null
  * object; APIs a host lacks fail at sync (ApiNotFound); event handlers are registered and removed
  * at sync and fire with the workbook's state at that moment. Counts syncs and reads for the tests.
+ *
+ * Self-contained (no imports), so charts.browser.test.ts can also transpile it into a stand-in
+ * office.js and run the real pane as if inside Excel.
  */
 
 export interface CellModel {
@@ -87,6 +90,7 @@ export class FakeExcel {
   activeCellReads = 0;
   readonly handlers = new Map<string, ((args: unknown) => Promise<void>)[]>();
   readonly log: string[] = [];
+  readonly settings = new Map<string, string>();
 
   constructor(readonly model: WorkbookModel) {}
 
@@ -179,14 +183,45 @@ class EventSlot {
   }
 }
 
+/** Workbook settings (the pane's workbook library lives there) and recalculation, as the pane's store uses them. */
+class Settings {
+  constructor(private readonly ctx: Context) {}
+  add(key: string, value: string): void {
+    this.ctx.enqueue(() => this.ctx.excel.settings.set(key, value));
+  }
+  getItemOrNullObject(key: string) {
+    const ctx = this.ctx;
+    const item = {
+      isNullObject: true,
+      value: undefined as unknown,
+      key,
+      load() {
+        ctx.enqueue(() => {
+          item.isNullObject = !ctx.excel.settings.has(key);
+          item.value = ctx.excel.settings.get(key);
+        });
+        return item;
+      },
+      delete() {
+        ctx.enqueue(() => ctx.excel.settings.delete(key));
+      },
+    };
+    return item;
+  }
+}
+
 class Workbook {
   readonly worksheets: Worksheets;
   readonly names: Names;
   readonly onSelectionChanged: EventSlot;
+  readonly settings: Settings;
+  readonly application: { calculate(type: string): void };
   constructor(private readonly ctx: Context) {
     this.worksheets = new Worksheets(ctx);
     this.names = new Names(ctx, () => ctx.excel.model.names ?? {});
     this.onSelectionChanged = new EventSlot(ctx, "workbook.onSelectionChanged", true);
+    this.settings = new Settings(ctx);
+    this.application = { calculate: (type: string) => ctx.enqueue(() => ctx.excel.log.push(`calculate ${type}`)) };
   }
   getActiveCell(): Range {
     this.ctx.excel.activeCellReads++;
