@@ -170,6 +170,21 @@ describe("titration curve", () => {
     expect(t.reason).toMatch(reason);
   });
 
+  test("a stock that cannot reach the usual end (hot, pKw lower) still shows the equivalence point, and says so", () => {
+    const m = mix(PHOSPHATE, "90");
+    const sp = spec(PHOSPHATE, { temperature: "90" });
+    const t = titration(m.mix, titrants(getActiveLibrary()), sp, { titrant: "NaOH" });
+    if (!t.ok) throw new Error(t.message);
+    expect(t.equivalence.length).toBe(1);
+    expect(Math.abs(t.equivalence[0].mL - 1)).toBeLessThan(0.01);
+    expect(t.maxML).toBeGreaterThan(2);
+    expect(t.warnings.join(" ")).toMatch(/cannot bring this sample to pH 11\.5 at 90 °C: the curve goes to about pH 10\.\d/);
+    // a titrant that cannot move the pH the asked way gives a short curve and a warning, not a failure
+    const strongBase = mix([{ name: "sodium hydroxide", amount: "0.1" }]);
+    const same = titration(strongBase.mix, titrants(getActiveLibrary()), spec([{ name: "sodium hydroxide", amount: "0.1" }]), { titrant: "NaOH" });
+    expect(same.ok && same.warnings).toEqual(["A 0.1 mol/L NaOH stock hardly moves this sample's pH: the curve stops at 20.0 mL."]);
+  });
+
   test("titratable amounts: a weak acid's base side is its concentration", () => {
     const a = titratableAmounts(spec([{ name: "acetic acid", amount: "0.1" }]));
     expect(Math.abs(a.base - 0.1)).toBeLessThan(0.002); // + 1 mmol/L of OH⁻ at pH 11, − the free H⁺ at the start

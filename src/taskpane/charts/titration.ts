@@ -12,10 +12,11 @@
  *
  * How far: the stock volume that brings the sample to pH 11.5 (NaOH) or 2.5 (HCl) — or one pH unit
  * beyond the start when the start is already past that — found by chem's adjust with dilution,
- * plus 15 %, rounded up to a round number of mL. A stock too dilute to get there gets twice the
- * sample's volume.
+ * plus 15 %, rounded up to a round number of mL. When the stock cannot get there (too dilute, or a
+ * hot solution, whose pKw is lower), the end is 85 % of the way from the start to the stock's own
+ * pH; a stock that hardly moves the pH gets twice the sample's volume.
  */
-import { adjust, curve } from "../../chem";
+import { adjust, curve, solvePH } from "../../chem";
 import type { ActivityModel, Component, Failure, Mixture } from "../../chem";
 import type { SpeciationData } from "./speciation";
 import { fractionsAt } from "./speciation";
@@ -118,13 +119,26 @@ export function titration(mix: Mixture, titrants: Record<TitrantName, Component>
   }
   const base = titrant === "NaOH";
   const target = base ? Math.max(END.base, sp.mixturePH + 1) : Math.min(END.acid, sp.mixturePH - 1);
-  const toEnd = adjust(mix, titrants[titrant], target, { ...chem, stock: { conc: stockConc, volume } });
+  const stock = { conc: stockConc, volume };
+  let toEnd = adjust(mix, titrants[titrant], target, { ...chem, stock });
+  let reached = target;
+  if (!toEnd.ok || !(toEnd.value > 0)) {
+    // the stock cannot get there (a dilute stock, or pKw lower when hot): go 85 % of the way to the stock's own pH
+    const own = solvePH([{ component: titrants[titrant], conc: stockConc }], chem);
+    if (own.ok && (base ? own.pH > sp.mixturePH : own.pH < sp.mixturePH)) {
+      reached = sp.mixturePH + 0.85 * (own.pH - sp.mixturePH);
+      toEnd = adjust(mix, titrants[titrant], reached, { ...chem, stock });
+    }
+  }
   const warnings: string[] = [];
   let maxL: number;
   if (toEnd.ok && toEnd.value > 0) maxL = niceCeil(toEnd.value * 1.15 * 1000) / 1000;
   else {
     maxL = 2 * volume;
-    warnings.push(`A ${stockConc} mol/L ${titrant} stock does not bring this sample to pH ${target.toFixed(1)}: the curve stops at ${(maxL * 1000).toPrecision(3)} mL.`);
+    warnings.push(`A ${stockConc} mol/L ${titrant} stock hardly moves this sample's pH: the curve stops at ${(maxL * 1000).toPrecision(3)} mL.`);
+  }
+  if (reached !== target && toEnd.ok) {
+    warnings.push(`A ${stockConc} mol/L ${titrant} stock cannot bring this sample to pH ${target.toFixed(1)} at ${sp.temperatureC} °C: the curve goes to about pH ${reached.toFixed(1)}.`);
   }
   const r = curve(mix, titrants[titrant], { stockConc, volume, maxVolume: maxL, points: opts.points ?? TITRATION_DEFAULTS.points }, chem);
   if (!r.ok) return r;
