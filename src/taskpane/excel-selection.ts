@@ -11,8 +11,8 @@
  * watchSelection: worksheets.onSelectionChanged and onActivated (ExcelApi 1.9) or, on older hosts,
  * the workbook's onSelectionChanged; the returned function removes the handlers.
  */
-import { findAqCall, type AqCall, type ArgSource, type CellValue } from "./formula/aq-call";
-import { mixtureFromValues, type MixtureSpec } from "./formula/mixture-values";
+import { CALL_ARGS, findAqCall, type AqCall, type ArgSource, type CallArg, type CellValue } from "./formula/aq-call";
+import { mixtureFromValues, titrationFromValues, type MixtureSpec } from "./formula/mixture-values";
 
 /** The part of the Excel namespace this module uses (the real `Excel`, or a test double). */
 export interface SelectionExcel {
@@ -28,8 +28,18 @@ function why(e: unknown): string {
   return e instanceof Error ? e.message : String(e);
 }
 
-const ARGS = ["names", "amounts", "temperature", "activity"] as const;
-type ArgName = (typeof ARGS)[number];
+type ArgName = CallArg;
+const OPTIONAL = new Set<CallArg>(["titrant", "titrantConc", "volume", "maxVolume"]);
+const LABEL: Record<CallArg, string> = {
+  names: "names",
+  amounts: "amounts",
+  temperature: "temperature",
+  activity: "activity",
+  titrant: "titrant",
+  titrantConc: "titrant_conc",
+  volume: "volume",
+  maxVolume: "max_titrant_volume",
+};
 
 type Loaded = { ok: true; values: CellValue[][] | null } | { ok: false; message: string };
 
@@ -48,7 +58,7 @@ function asCells(values: unknown[][]): CellValue[][] {
 
 function loaded(p: Pending): Loaded {
   const s = p.source;
-  const label = `the ${p.arg} argument (${"text" in s ? s.text : ""})`;
+  const label = `the ${LABEL[p.arg]} argument (${"text" in s ? s.text : ""})`;
   switch (s.kind) {
     case "missing":
       return { ok: true, values: null };
@@ -97,7 +107,7 @@ export async function readSelectedMixture(excel: SelectionExcel): Promise<Select
       const found = findAqCall(formula);
       if (!found.ok) return { ok: false as const, address, formula: typeof formula === "string" ? formula : null, message: found.message };
       const call = found.call;
-      const pending: Pending[] = ARGS.map((arg) => {
+      const pending: Pending[] = CALL_ARGS.map((arg) => {
         const source = call[arg];
         const p: Pending = { arg, source };
         if (source.kind === "ref") {
@@ -123,13 +133,16 @@ export async function readSelectedMixture(excel: SelectionExcel): Promise<Select
       const values = {} as Record<ArgName, CellValue[][] | null>;
       for (const p of pending) {
         const v = loaded(p);
-        if (!v.ok) return { ok: false as const, address, formula: formula as string, message: v.message };
-        values[p.arg] = v.values;
+        // the mixture's arguments must be read; the titration's are a bonus (the view keeps its own settings)
+        if (!v.ok && OPTIONAL.has(p.arg)) values[p.arg] = null;
+        else if (!v.ok) return { ok: false as const, address, formula: formula as string, message: v.message };
+        else values[p.arg] = v.values;
       }
       if (!values.names || !values.amounts) return { ok: false as const, address, formula: formula as string, message: `${call.text} has no names or amounts argument` };
       const spec = mixtureFromValues(values.names, values.amounts, values.temperature, values.activity);
       if (!spec.ok) return { ok: false as const, address, formula: formula as string, message: `${call.text}: ${spec.message}` };
-      return { ok: true as const, address, formula: formula as string, call, spec: spec.spec };
+      const titration = titrationFromValues(call.fn.id, values.titrant, values.titrantConc, values.volume, values.maxVolume);
+      return { ok: true as const, address, formula: formula as string, call, spec: titration ? { ...spec.spec, titration } : spec.spec };
     });
   } catch (e) {
     return { ok: false, address: null, formula: null, message: `Excel could not read the selected cell: ${why(e)}` };

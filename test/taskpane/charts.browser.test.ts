@@ -270,6 +270,7 @@ const WORKBOOK: WorkbookModel = {
         D2: { formula: "=AQ.PH(A2:A3,B2:B3,C1)", value: 6.96 },
         D3: { formula: "=ROUND(AQ.BETA('Acetate buffer'!$A$2:$A$3,'Acetate buffer'!$B$2:$B$3,37),4)", value: 0.05 },
         D4: { value: 7 },
+        D5: { formula: '=AQ.CURVE(A2:A3,B2:B3,"NaOH",0.1,0.025,0.03,61)', value: 0 },
       },
     },
     { name: "Acetate buffer", cells: { A2: { value: "acetic acid" }, A3: { value: "sodium acetate" }, B2: { value: 0.1 }, B3: { value: 0.1 } } },
@@ -344,6 +345,22 @@ describe("Picture view inside Excel (a stand-in office.js over the hand mock of 
     await page.getByRole("tab", { name: "Picture" }).click();
     await waitForText(page.locator("#picture-source"), /From the Try it mixture: 20 mM Tris \+ 20 mM Tris HCl, 25 °C\.$/);
     expect(await page.locator("#picture-speciation svg.speciation").getAttribute("data-system")).toBe("tris");
+  });
+
+  test("an AQ.CURVE cell: the picture titrates as the formula does, until the settings are changed", async () => {
+    await fakeExcel("select", "Sheet1", "D5");
+    await fakeExcel("fireSelectionChanged");
+    await waitForText(page.locator("#picture-formula-titration"), "Titration as in the formula: 0.1 M NaOH, 25 mL sample, up to 30 mL.");
+    const svg = page.locator("#picture-curve svg.titration");
+    await waitForContent(svg.locator(".axis-title").first(), "mL of 0.1 M NaOH added to 25 mL");
+    expect((await svg.locator(".x-axis text").allTextContents()).slice(-2)).toEqual(["30", "mL of 0.1 M NaOH added to 25 mL"]);
+    expect(Number(await svg.locator(".eq-marker").first().getAttribute("data-ml"))).toBeCloseTo(2.5, 2);
+    expect(await page.locator("#picture-sample").inputValue()).toBe("25 mL");
+    await page.fill("#picture-sample", "10 mL");
+    await page.click("#picture-redraw");
+    await waitForText(page.locator("#picture-formula-titration"), "Titration settings changed from the formula's.");
+    await waitForContent(svg.locator(".axis-title").first(), "mL of 0.1 M NaOH added to 10 mL");
+    expect(Number(await svg.locator(".eq-marker").first().getAttribute("data-ml"))).toBeCloseTo(1.0, 2);
   });
 
   test("leaving the tab removes the handlers: selection changes are no longer read; coming back reads again", async () => {

@@ -8,7 +8,7 @@ import { daviesLog10Gamma, debyeHuckelA, solveEquilibrium } from "../../src/chem
 import { getActiveLibrary, resetActiveLibrary } from "../../src/library";
 import { renderCurve, pHWindow } from "../../src/taskpane/charts/curve-svg";
 import { displayName } from "../../src/taskpane/charts/palette";
-import { pictureOf, titrants } from "../../src/taskpane/charts/picture";
+import { pictureOf, titrantOf, titrants } from "../../src/taskpane/charts/picture";
 import { fractionsAt, speciation, type SpeciationData } from "../../src/taskpane/charts/speciation";
 import { renderSpeciation, visibleRun } from "../../src/taskpane/charts/speciation-svg";
 import { SVG_NS } from "../../src/taskpane/charts/svg";
@@ -206,6 +206,16 @@ describe("titration curve", () => {
     expect(good.titration.data).toMatchObject({ titrant: "HCl", stockConc: 0.05 });
     expect(good.titration.data.sampleVolumeML).toBeCloseTo(20, 10);
     expect(good.used.map((u) => u.id)).toEqual(["sodium-dihydrogen-phosphate", "disodium-hydrogen-phosphate"]);
+  });
+
+  test("an AQ.CURVE formula's range is kept; its titrant names map to NaOH and HCl", () => {
+    const lib = getActiveLibrary();
+    const p = pictureOf(lib, { rows: PHOSPHATE, temperature: "", titrant: "NaOH", stock: "0.1 M", sample: "25 mL", maxVolume: "30 mL" });
+    if (!p.ok || !p.titration.ok) throw new Error("expected a picture");
+    expect(p.titration.data.maxML).toBeCloseTo(30, 9);
+    expect(p.titration.data.points[p.titration.data.points.length - 1].mL).toBeCloseTo(30, 9);
+    expect(Math.abs(p.titration.data.equivalence[0].mL - 2.5)).toBeLessThan(0.02); // 10 mM × 25 mL / 0.1 M
+    expect(["NaOH", "sodium hydroxide", "caustic soda", "HCl", "hydrogen chloride", "KOH", "acetic acid", "nothing"].map((n) => titrantOf(lib, n))).toEqual(["NaOH", "NaOH", "NaOH", "HCl", "HCl", null, null, null]);
   });
 });
 

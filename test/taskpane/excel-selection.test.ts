@@ -27,6 +27,9 @@ const RECIPES: SheetModel = {
     D8: { formula: '=AQ.PH({"acetic acid";"sodium acetate"},{0.1;0.1},Conditions!B1,"ideal")', value: 4.7 },
     D9: { formula: "=AQ.PH(A2:A3,B2:B3*2)", value: 7 },
     E2: { formula: "=AQ.SPECIES(A2:A3,B2:B3)", value: "H+" },
+    G1: { value: 0.1 },
+    G2: { formula: '=AQ.CURVE(A2:A3,B2:B3,"NaOH",$G$1,"25 mL",0.03,61)', value: 0 },
+    G3: { formula: '=AQ.CURVE(A2:A3,B2:B3,"NaOH",G1*2,0.025,Nowhere!A1)', value: 0 },
     E3: { value: "OH-" },
   },
   spills: { E3: "E2", F2: "E2" },
@@ -140,6 +143,15 @@ describe("readSelectedMixture", () => {
     expect(await read(x, "D9")).toMatchObject({ ok: false, message: "the amounts argument (B2:B3*2) cannot be used: it is a calculation: the pane reads only ranges, inline arrays and values" });
     expect(await read(x, "D4")).toMatchObject({ ok: false, address: "Sheet1!D4", message: "the cell holds a value, not a formula" });
     expect(await read(x, "Z9")).toMatchObject({ ok: false, address: "Sheet1!Z9", message: "the cell is empty" });
+  });
+
+  test("an AQ.CURVE cell gives its titration too; a titration argument that cannot be read is left out, the mixture still read", async () => {
+    const x = workbook();
+    const r = await read(x, "G2");
+    expect(r.ok && r.spec.titration).toEqual({ titrant: "NaOH", stock: "0.1 M", sample: "25 mL", maxVolume: "30 mL" });
+    const partial = await read(x, "G3");
+    expect(partial.ok && partial.spec.titration).toEqual({ titrant: "NaOH", sample: "25 mL" });
+    expect(partial.ok && partial.spec.rows.length).toBe(2);
   });
 
   test("a cell inside a spilled AQ.SPECIES table is read through the spill's anchor", async () => {

@@ -8,7 +8,7 @@ import { CATALOGUE } from "../../src/functions/catalogue";
 import { getActiveLibrary, resetActiveLibrary } from "../../src/library";
 import { pictureOf } from "../../src/taskpane/charts/picture";
 import { aqFunctionId, findAqCall, MIXTURE_FUNCTIONS, type AqCall, type ArgSource } from "../../src/taskpane/formula/aq-call";
-import { mixtureFromValues } from "../../src/taskpane/formula/mixture-values";
+import { mixtureFromValues, titrationFromValues } from "../../src/taskpane/formula/mixture-values";
 import { calls, parseFormula, FormulaSyntaxError } from "../../src/taskpane/formula/parse";
 import { tokenize } from "../../src/taskpane/formula/tokens";
 
@@ -139,6 +139,18 @@ describe("the AQ call of a formula", () => {
     expect(call("=AQ.CHECK(A1,B1,C1,D1)")).toMatchObject({ temperature: ref("C1"), activity: ref("D1") });
   });
 
+  test("how AQ.CURVE and AQ.ADJUST titrate; the other functions have no titration", () => {
+    expect(call('=AQ.CURVE(A2:A3,B2:B3,"NaOH",0.1,E1,"30 mL",61,25)')).toMatchObject({
+      titrant: values(["NaOH"]),
+      titrantConc: values([0.1]),
+      volume: ref("E1"),
+      maxVolume: values(["30 mL"]),
+      temperature: values([25]),
+    });
+    expect(call('=AQ.ADJUST(A1:A2,B1:B2,7,"HCl",1,800)')).toMatchObject({ titrant: values(["HCl"]), titrantConc: values([1]), volume: values([800]), maxVolume: { kind: "missing" } });
+    expect(call("=AQ.PH(A1:A2,B1:B2)")).toMatchObject({ titrant: { kind: "missing" }, titrantConc: { kind: "missing" }, volume: { kind: "missing" } });
+  });
+
   test("the function's name in the forms Excel shows", () => {
     expect(["AQ.PH", "aq.ph", "_xldudf_AQ_PH", "AQ_BETA", "SUM", "XAQ.PH"].map(aqFunctionId)).toEqual(["PH", "PH", "PH", "BETA", null, null]);
     expect(call("=_xldudf_AQ_PH(A1:A2,B1:B2)").fn.id).toBe("PH");
@@ -195,6 +207,16 @@ describe("values → the pane's rows", () => {
     expect(mixtureFromValues([["a"]], [[1]], [[25, 30]])).toEqual({ ok: false, message: "the temperature must be one cell, not 1×2 cells" });
     expect(mixtureFromValues([["a"]], [[1]], null, [["fancy"]])).toEqual({ ok: false, message: "the activity model 'fancy' is not known (davies, ideal or debye-huckel)" });
     expect(mixtureFromValues([["a"]], [[true]])).toEqual({ ok: false, message: "a name or amount is TRUE/FALSE" });
+  });
+
+  test("a titration's values → the Picture view's fields (numbers in mol/L and L get their units)", () => {
+    expect(titrationFromValues("CURVE", [["NaOH"]], [[0.1]], [[0.025]], [["30 mL"]])).toEqual({ titrant: "NaOH", stock: "0.1 M", sample: "25 mL", maxVolume: "30 mL" });
+    expect(titrationFromValues("CURVE", [["HCl"]], [["100 mM"]], [["#N/A"]], null)).toEqual({ titrant: "HCl", stock: "100 mM" });
+    // ADJUST's volume is a batch (800 L), not a sample: only the titrant and its stock are taken
+    expect(titrationFromValues("ADJUST", [["NaOH"]], [[1]], [[800]], null)).toEqual({ titrant: "NaOH", stock: "1 M" });
+    expect(titrationFromValues("ADJUST", [["NaOH"]], null, null, null)).toEqual({ titrant: "NaOH" });
+    expect(titrationFromValues("CURVE", [[0.1]], [[0.1]], [[0.01]], [[0.02]])).toBeUndefined();
+    expect(titrationFromValues("CURVE", null, null, null, null)).toBeUndefined();
   });
 
   test("a formula with inline arrays draws the same picture as the Try it rows", () => {

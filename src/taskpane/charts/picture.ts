@@ -20,6 +20,8 @@ export interface PictureRequest {
   stock?: string;
   /** Sample volume as text ("10 mL"); "" for 10 mL. */
   sample?: string;
+  /** Largest titrant volume as text ("30 mL"), as an AQ.CURVE formula sets it; absent: found from the mixture. */
+  maxVolume?: string;
 }
 
 export type Picture =
@@ -38,6 +40,17 @@ export function titrants(library: Library): Record<TitrantName, Component> {
   return { NaOH: base.ok ? base.component : STRONG_BASE, HCl: acid.ok ? acid.component : STRONG_ACID };
 }
 
+/** "NaOH", "caustic soda", "HCl" … → which of the two titrants the name is in the library, or null. */
+export function titrantOf(library: Library, name: string): TitrantName | null {
+  const found = library.resolve(name);
+  if (!found.ok) return null;
+  for (const [t, canonical] of [["NaOH", "sodium hydroxide"], ["HCl", "hydrochloric acid"]] as const) {
+    const c = library.resolve(canonical);
+    if (c.ok && c.entry.id === found.entry.id) return t;
+  }
+  return null;
+}
+
 function positive(text: string | undefined, fallback: number, what: string, dimension: "concentration" | "volume"): { ok: true; value: number } | { ok: false; message: string } {
   if (text === undefined || text.trim() === "") return { ok: true, value: fallback };
   const q = parseQuantity(text, dimension);
@@ -53,11 +66,13 @@ export function pictureOf(library: Library, req: PictureRequest): Picture {
   if (!sp.ok) return { ok: false, issues: [sp.message] };
   const stock = positive(req.stock, TITRATION_DEFAULTS.stockConc, "titrant stock", "concentration");
   const sample = positive(req.sample, TITRATION_DEFAULTS.sampleVolume, "sample volume", "volume");
+  const max = req.maxVolume === undefined ? ({ ok: true, value: undefined } as const) : positive(req.maxVolume, NaN, "largest titrant volume", "volume");
   let t: Extract<Picture, { ok: true }>["titration"];
   if (!stock.ok) t = stock;
   else if (!sample.ok) t = sample;
+  else if (!max.ok) t = max;
   else {
-    const r = titration(m.mix, titrants(library), sp, { titrant: req.titrant ?? "auto", stockConc: stock.value, sampleVolume: sample.value });
+    const r = titration(m.mix, titrants(library), sp, { titrant: req.titrant ?? "auto", stockConc: stock.value, sampleVolume: sample.value, maxVolume: max.value });
     t = r.ok ? { ok: true, data: r } : { ok: false, message: r.message };
   }
   return { ok: true, speciation: sp, titration: t, used: m.used };

@@ -31,6 +31,8 @@ export interface TitrationOptions {
   stockConc?: number;
   /** Sample volume, L. Default 0.010 (10 mL). */
   sampleVolume?: number;
+  /** Largest titrant volume, L (as an AQ.CURVE formula sets it). Default: found as described above. */
+  maxVolume?: number;
   points?: number;
 }
 
@@ -92,6 +94,34 @@ function fmtMol(x: number): string {
   return x >= 0.1 ? `${x.toFixed(2)} mol/L` : `${(x * 1000).toPrecision(2)} mmol/L`;
 }
 
+/** Litres of stock the curve runs to (see the file's comment); notes go to `warnings`. */
+function curveEnd(mix: Mixture, titrant: Component, base: boolean, sp: SpeciationData, stockConc: number, volume: number, warnings: string[]): number {
+  const chem = { temperatureC: sp.temperatureC, activity: sp.activity };
+  const name = base ? "NaOH" : "HCl";
+  const target = base ? Math.max(END.base, sp.mixturePH + 1) : Math.min(END.acid, sp.mixturePH - 1);
+  const stock = { conc: stockConc, volume };
+  let toEnd = adjust(mix, titrant, target, { ...chem, stock });
+  let reached = target;
+  if (!toEnd.ok || !(toEnd.value > 0)) {
+    // the stock cannot get there (a dilute stock, or pKw lower when hot): go 85 % of the way to the stock's own pH
+    const own = solvePH([{ component: titrant, conc: stockConc }], chem);
+    if (own.ok && (base ? own.pH > sp.mixturePH : own.pH < sp.mixturePH)) {
+      reached = sp.mixturePH + 0.85 * (own.pH - sp.mixturePH);
+      toEnd = adjust(mix, titrant, reached, { ...chem, stock });
+    }
+  }
+  let maxL: number;
+  if (toEnd.ok && toEnd.value > 0) maxL = niceCeil(toEnd.value * 1.15 * 1000) / 1000;
+  else {
+    maxL = 2 * volume;
+    warnings.push(`A ${stockConc} mol/L ${name} stock hardly moves this sample's pH: the curve stops at ${(maxL * 1000).toPrecision(3)} mL.`);
+  }
+  if (reached !== target && toEnd.ok) {
+    warnings.push(`A ${stockConc} mol/L ${name} stock cannot bring this sample to pH ${target.toFixed(1)} at ${sp.temperatureC} °C: the curve goes to about pH ${reached.toFixed(1)}.`);
+  }
+  return maxL;
+}
+
 export function titration(mix: Mixture, titrants: Record<TitrantName, Component>, sp: SpeciationData, opts: TitrationOptions = {}): TitrationData | Failure {
   const stockConc = opts.stockConc ?? TITRATION_DEFAULTS.stockConc;
   const volume = opts.sampleVolume ?? TITRATION_DEFAULTS.sampleVolume;
@@ -118,28 +148,8 @@ export function titration(mix: Mixture, titrants: Record<TitrantName, Component>
     }
   }
   const base = titrant === "NaOH";
-  const target = base ? Math.max(END.base, sp.mixturePH + 1) : Math.min(END.acid, sp.mixturePH - 1);
-  const stock = { conc: stockConc, volume };
-  let toEnd = adjust(mix, titrants[titrant], target, { ...chem, stock });
-  let reached = target;
-  if (!toEnd.ok || !(toEnd.value > 0)) {
-    // the stock cannot get there (a dilute stock, or pKw lower when hot): go 85 % of the way to the stock's own pH
-    const own = solvePH([{ component: titrants[titrant], conc: stockConc }], chem);
-    if (own.ok && (base ? own.pH > sp.mixturePH : own.pH < sp.mixturePH)) {
-      reached = sp.mixturePH + 0.85 * (own.pH - sp.mixturePH);
-      toEnd = adjust(mix, titrants[titrant], reached, { ...chem, stock });
-    }
-  }
   const warnings: string[] = [];
-  let maxL: number;
-  if (toEnd.ok && toEnd.value > 0) maxL = niceCeil(toEnd.value * 1.15 * 1000) / 1000;
-  else {
-    maxL = 2 * volume;
-    warnings.push(`A ${stockConc} mol/L ${titrant} stock hardly moves this sample's pH: the curve stops at ${(maxL * 1000).toPrecision(3)} mL.`);
-  }
-  if (reached !== target && toEnd.ok) {
-    warnings.push(`A ${stockConc} mol/L ${titrant} stock cannot bring this sample to pH ${target.toFixed(1)} at ${sp.temperatureC} °C: the curve goes to about pH ${reached.toFixed(1)}.`);
-  }
+  const maxL = opts.maxVolume ?? curveEnd(mix, titrants[titrant], base, sp, stockConc, volume, warnings);
   const r = curve(mix, titrants[titrant], { stockConc, volume, maxVolume: maxL, points: opts.points ?? TITRATION_DEFAULTS.points }, chem);
   if (!r.ok) return r;
   for (const w of r.warnings) if (!warnings.includes(w)) warnings.push(w);

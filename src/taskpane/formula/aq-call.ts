@@ -26,9 +26,23 @@ export interface MixtureFunction {
   /** Index of the temperature and activity parameters, or -1. */
   temperature: number;
   activity: number;
+  /** Index of the titrant, its stock concentration, the volume and the largest titrant volume, or -1 (ADJUST, CURVE). */
+  titrant: number;
+  titrantConc: number;
+  volume: number;
+  maxVolume: number;
 }
 
-const fn = (id: string, params: string[]): MixtureFunction => ({ id, params, temperature: params.indexOf("temperature"), activity: params.indexOf("activity") });
+const fn = (id: string, params: string[]): MixtureFunction => ({
+  id,
+  params,
+  temperature: params.indexOf("temperature"),
+  activity: params.indexOf("activity"),
+  titrant: params.indexOf("titrant"),
+  titrantConc: params.indexOf("titrant_conc"),
+  volume: params.indexOf("volume"),
+  maxVolume: params.indexOf("max_titrant_volume"),
+});
 
 /** The AQ functions whose first two arguments are a mixture's names and amounts. */
 export const MIXTURE_FUNCTIONS: readonly MixtureFunction[] = [
@@ -61,7 +75,16 @@ export interface AqCall {
   amounts: ArgSource;
   temperature: ArgSource;
   activity: ArgSource;
+  /** ADJUST and CURVE: how they titrate (missing for the other functions). */
+  titrant: ArgSource;
+  titrantConc: ArgSource;
+  volume: ArgSource;
+  maxVolume: ArgSource;
 }
+
+/** The arguments of an AqCall that carry values. */
+export const CALL_ARGS = ["names", "amounts", "temperature", "activity", "titrant", "titrantConc", "volume", "maxVolume"] as const;
+export type CallArg = (typeof CALL_ARGS)[number];
 
 export type FindResult =
   | { ok: true; call: AqCall }
@@ -133,15 +156,20 @@ export function findAqCall(formula: unknown): FindResult {
     const id = aqFunctionId(c.name);
     const f = id ? MIXTURE_FUNCTIONS.find((m) => m.id === id) : undefined;
     if (!f) continue;
+    const at = (i: number): ArgSource => (i >= 0 ? argSource(c.args[i], formula) : { kind: "missing" });
     return {
       ok: true,
       call: {
         fn: f,
         text: formula.slice(c.start, c.end),
-        names: argSource(c.args[0], formula),
-        amounts: argSource(c.args[1], formula),
-        temperature: f.temperature >= 0 ? argSource(c.args[f.temperature], formula) : { kind: "missing" },
-        activity: f.activity >= 0 ? argSource(c.args[f.activity], formula) : { kind: "missing" },
+        names: at(0),
+        amounts: at(1),
+        temperature: at(f.temperature),
+        activity: at(f.activity),
+        titrant: at(f.titrant),
+        titrantConc: at(f.titrantConc),
+        volume: at(f.volume),
+        maxVolume: at(f.maxVolume),
       },
     };
   }

@@ -8,11 +8,24 @@ import type { ActivityModel } from "../../chem";
 import type { TryRow } from "../tryit";
 import type { CellValue } from "./aq-call";
 
+/** How an AQ.CURVE or AQ.ADJUST formula titrates, as text the Picture view's fields take. */
+export interface TitrationSpec {
+  /** The titrant's name as written ("NaOH", "sodium hydroxide" …). */
+  titrant: string;
+  /** Stock concentration ("0.1 M", "100 mM"), when given. */
+  stock?: string;
+  /** Sample volume ("25 mL"), AQ.CURVE only (AQ.ADJUST's volume is a batch). */
+  sample?: string;
+  /** Largest titrant volume ("30 mL"), AQ.CURVE only. */
+  maxVolume?: string;
+}
+
 export interface MixtureSpec {
   rows: TryRow[];
   /** °C as text ("" for the default 25 °C), as the try-it panel holds it. */
   temperature: string;
   activity: ActivityModel;
+  titration?: TitrationSpec;
 }
 
 export type SpecResult = { ok: true; spec: MixtureSpec } | { ok: false; message: string };
@@ -86,4 +99,32 @@ export function mixtureFromValues(names: CellValue[][], amounts: CellValue[][], 
     model = ACTIVITY[key];
   }
   return { ok: true, spec: { rows, temperature: blank(t.value) ? "" : String(t.value).trim(), activity: model } };
+}
+
+/** A number in the unit the functions take (mol/L, L) as text with that unit; text stays as written. */
+function withUnit(v: CellValue, unit: "M" | "mL"): string | undefined {
+  if (typeof v === "number" && Number.isFinite(v) && v > 0) return unit === "M" ? `${Number(v.toPrecision(6))} M` : `${Number((v * 1000).toPrecision(6))} mL`;
+  if (typeof v === "string" && v.trim() !== "" && !errorText(v)) return v.trim();
+  return undefined;
+}
+
+/**
+ * The titration of an AQ.CURVE (titrant, stock, sample volume, largest volume) or AQ.ADJUST
+ * (titrant and stock) formula; undefined when the titrant is not a single text. Values that are not
+ * usable are left out (the view keeps its own).
+ */
+export function titrationFromValues(fnId: string, titrant: CellValue[][] | null, conc: CellValue[][] | null, volume: CellValue[][] | null, maxVolume: CellValue[][] | null): TitrationSpec | undefined {
+  const one = (v: CellValue[][] | null): CellValue => (v && v.length === 1 && v[0].length === 1 ? v[0][0] : null);
+  const name = one(titrant);
+  if (typeof name !== "string" || name.trim() === "" || errorText(name)) return undefined;
+  const out: TitrationSpec = { titrant: name.trim() };
+  const stock = withUnit(one(conc), "M");
+  if (stock) out.stock = stock;
+  if (fnId === "CURVE") {
+    const sample = withUnit(one(volume), "mL");
+    const max = withUnit(one(maxVolume), "mL");
+    if (sample) out.sample = sample;
+    if (max) out.maxVolume = max;
+  }
+  return out;
 }

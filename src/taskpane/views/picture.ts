@@ -7,7 +7,7 @@
  */
 import { el, replaceChildren } from "../dom";
 import type { PaneController } from "../controller";
-import { pictureOf, type PictureRequest } from "../charts/picture";
+import { pictureOf, titrantOf, type PictureRequest } from "../charts/picture";
 import { conditions } from "../charts/summary";
 import type { TitrantName } from "../charts/titration";
 import type { SelectedMixture, SelectionExcel } from "../excel-selection";
@@ -31,6 +31,9 @@ export class PictureView {
   private sample = "10 mL";
   private visible = false;
   private readonly follower: SelectionFollower | null;
+  /** The titration an AQ.CURVE / AQ.ADJUST formula set, while the fields still hold it. */
+  private fromFormula: { titrant: TitrantName | "auto"; stock: string; sample: string; maxVolume?: string; note: string } | null = null;
+  private controls: { titrant: HTMLSelectElement; stock: HTMLInputElement; sample: HTMLInputElement } | null = null;
   private readonly source = el("div", { id: "picture-source" });
   private readonly facts = el("div", { id: "picture-facts" });
   private readonly spec = el("div", { id: "picture-speciation" });
@@ -44,7 +47,10 @@ export class PictureView {
     this.follower = deps.excel
       ? new SelectionFollower(
           deps.excel,
-          () => this.visible && this.draw(),
+          (s) => {
+            this.adopt(s);
+            if (this.visible) this.draw();
+          },
           (why) => replaceChildren(this.facts, message("warn", `Selection changes cannot be followed in this Excel (${why}): use “Read the selected cell again”.`)),
         )
       : null;
@@ -70,6 +76,7 @@ export class PictureView {
     titrant.id = "picture-titrant";
     const stock = textInput(this.stock, (v) => (this.stock = v), { id: "picture-stock", inputmode: "decimal" });
     const sample = textInput(this.sample, (v) => (this.sample = v), { id: "picture-sample", inputmode: "decimal" });
+    this.controls = { titrant, stock, sample };
     const form = el(
       "form",
       { novalidate: true, "aria-label": "Titration settings", class: "picture-settings" },
@@ -125,14 +132,46 @@ export class PictureView {
     if (this.visible) this.draw();
   }
 
+  /**
+   * A formula that titrates (AQ.CURVE, AQ.ADJUST) sets the titration fields: its titrant when it is
+   * NaOH or HCl, its stock, and for AQ.CURVE the sample and the largest volume. The user may change
+   * them; the formula's largest volume applies while the fields still hold the formula's values.
+   */
+  private adopt(s: SelectedMixture): void {
+    const t = s.ok ? s.spec.titration : undefined;
+    if (!t) {
+      this.fromFormula = null;
+      return;
+    }
+    const titrant = titrantOf(this.ctl.library, t.titrant);
+    const parts = [titrant ? `${t.stock ?? this.stock} ${titrant}` : null, t.sample ? `${t.sample} sample` : null, t.maxVolume ? `up to ${t.maxVolume}` : null].filter(Boolean);
+    const note = titrant
+      ? `Titration as in the formula: ${parts.join(", ")}.`
+      : `The formula titrates with ${t.titrant}; the picture titrates with NaOH or HCl${parts.length ? ` (${parts.join(", ")})` : ""}.`;
+    this.fromFormula = { titrant: titrant ?? this.titrant, stock: t.stock ?? this.stock, sample: t.sample ?? this.sample, maxVolume: t.maxVolume, note };
+    this.titrant = this.fromFormula.titrant;
+    this.stock = this.fromFormula.stock;
+    this.sample = this.fromFormula.sample;
+    if (this.controls) {
+      this.controls.titrant.value = this.titrant;
+      this.controls.stock.value = this.stock;
+      this.controls.sample.value = this.sample;
+    }
+  }
+
   /** The mixture to draw and a line saying where it comes from. */
   private request(): { req: PictureRequest; from: HTMLElement[] } | null {
     const s = this.selected;
     const settings = { titrant: this.titrant, stock: this.stock, sample: this.sample };
     if (this.deps.excel && s?.ok) {
+      const f = this.fromFormula;
+      const same = f !== null && f.titrant === this.titrant && f.stock === this.stock && f.sample === this.sample;
       return {
-        req: { ...s.spec, ...settings },
-        from: [el("p", { class: "source" }, `From the selected cell ${s.address}: `, el("code", { class: "formula" }, s.formula))],
+        req: { ...s.spec, ...settings, maxVolume: same ? f.maxVolume : undefined },
+        from: [
+          el("p", { class: "source" }, `From the selected cell ${s.address}: `, el("code", { class: "formula" }, s.formula)),
+          ...(f ? [el("p", { class: "hint", id: "picture-formula-titration" }, same ? f.note : "Titration settings changed from the formula's.")] : []),
+        ],
       };
     }
     const from: HTMLElement[] = [];
