@@ -16,10 +16,11 @@
  * now()). Not a test: nothing here asserts a speed.
  */
 import { spawnSync } from "node:child_process";
-import { existsSync, readFileSync, readdirSync, statSync } from "node:fs";
-import { cpus, loadavg } from "node:os";
+import { existsSync, mkdtempSync, readFileSync, readdirSync, rmSync, statSync, writeFileSync } from "node:fs";
+import { cpus, loadavg, tmpdir } from "node:os";
 import { join } from "node:path";
 import { gzipSync } from "node:zlib";
+import { FunctionArgumentType, FunctionPlugin, HyperFormula, SimpleRangeValue } from "hyperformula";
 import { prepare, solvePH, type ActivityModel, type Component, type Mixture } from "../src/chem";
 import * as workflows from "../src/chem/workflows";
 import { evaluateSheets } from "../src/cli/evaluate";
@@ -195,6 +196,36 @@ function partA(): void {
   }
   table(["mixture", "activity", "T", "pH", "fresh", "per solve", "prepared", "per solve"], rows);
   console.log("    target: ≥ 200 000 Davies solves/s for phosphate + NaCl + NaOH");
+  partA2();
+}
+
+/** The functions layer's cost per call, as Excel calls AQ.PH (ranges as rows of columns). */
+function partA2(): void {
+  console.log("\n(a2) AQ.PH called as Excel calls it (names and amounts as rows of columns; Davies, 25 °C)");
+  const names = [["acetic acid", "sodium acetate"]];
+  const rows = Array.from({ length: SHEET_ROWS }, (_, i) => [amountsOf(i)]);
+  const mixtures = rows.map(([[a, b]]) => [
+    { component: component("acetic acid"), conc: a },
+    { component: component("sodium acetate"), conc: b },
+  ]);
+  const PH = AQ.PH as (n: unknown, a: unknown, t: unknown, m: unknown) => number;
+  const engine = rate((i) => {
+    const r = solvePH(mixtures[i % SHEET_ROWS], {});
+    return r.ok ? r.pH : NaN;
+  });
+  const cold = rate((i) => {
+    if (i % SHEET_ROWS === 0) clearMixtureCache();
+    return PH(names, rows[i % SHEET_ROWS], null, null);
+  });
+  const hit = rate((i) => PH(names, rows[i % 20], null, null));
+  table(
+    ["call", "calls", "per call"],
+    [
+      ["engine only: solvePH(mixture) on a new mixture", fmtRate(engine), fmtMicro(engine)],
+      ["AQ.PH, a new mixture on every call (a what-if table's rows)", fmtRate(cold), fmtMicro(cold)],
+      ["AQ.PH, a mixture asked for before (cache hit: PH, BETA… on one row)", fmtRate(hit), fmtMicro(hit)],
+    ],
+  );
 }
 
 // ---- (b) what-if sheet ---------------------------------------------------------------------
@@ -222,7 +253,31 @@ const SHEETS: { label: string; formula: (r: number) => string }[] = [
   { label: "=AQ.PH($E$1:$F$1,A2:B2)  (names in a fixed range)", formula: (r) => `=AQ.PH($E$1:$F$1,A${r}:B${r})` },
   { label: '=AQ.PH({"acetic acid","sodium acetate"},A2:B2)  (inline array)', formula: (r) => `=AQ.PH({"acetic acid","sodium acetate"},A${r}:B${r})` },
   { label: "=4.756+LOG10(B2/A2)  (Henderson–Hasselbalch, built-ins: baseline)", formula: (r) => `=4.756+LOG10(B${r}/A${r})` },
+  { label: "=BENCH.FLOOR($E$1:$F$1,A2:B2)  (custom function returning 7)", formula: (r) => `=BENCH.FLOOR($E$1:$F$1,A${r}:B${r})` },
 ];
+
+/**
+ * HyperFormula's own cost for a custom function with AQ.PH's arguments: a plugin registered the way
+ * src/cli/hf-plugin.ts registers the AQ functions (runFunction, ANY arguments, no vectorization)
+ * that reads both ranges and returns a constant. Not part of the product: it shows what bounds (b).
+ */
+function registerFloorFunction(): void {
+  class BenchFloor extends FunctionPlugin {
+    floor(ast: { args: unknown[] }, state: unknown): unknown {
+      const self = this as unknown as { runFunction: Function; metadata: (name: string) => unknown };
+      return self.runFunction(ast.args, state, self.metadata("BENCH.FLOOR"), (names: unknown, amounts: unknown) => {
+        let cells = 0;
+        for (const v of [names, amounts]) if (v instanceof SimpleRangeValue) for (const row of v.data) cells += row.length;
+        return cells > 0 ? 7 : 0;
+      });
+    }
+  }
+  const any = { argumentType: FunctionArgumentType.ANY };
+  (BenchFloor as unknown as { implementedFunctions: unknown }).implementedFunctions = {
+    "BENCH.FLOOR": { method: "floor", parameters: [any, any], vectorizationForbidden: true },
+  };
+  HyperFormula.registerFunctionPlugin(BenchFloor as never, { enGB: { "BENCH.FLOOR": "BENCH.FLOOR" } });
+}
 
 /** CPU and wall seconds to build and evaluate the sheet and read every value back (evaluateSheets). */
 function sheetSeconds(sheet: Raw): { cpu: number; wall: number; errors: number; sample: unknown } {
@@ -238,6 +293,7 @@ function partB(): void {
   console.log("    columns A, B: acetic acid and sodium acetate, mol/L, a different pair on every row; C: the formula;");
   console.log("    time = build the engine, evaluate every formula, read all values back (mixture cache cleared first);");
   console.log(`    the sheets take turns, ${SHEET_RUNS} rounds; best CPU time and best wall time of each`);
+  registerFloorFunction();
   // Warm-up: JIT-compile HyperFormula's and our code on a smaller sheet of each kind.
   for (const s of SHEETS) sheetSeconds(whatIfSheet(2000, s.formula));
   const sheets = SHEETS.map((s) => whatIfSheet(SHEET_ROWS, s.formula));
@@ -261,6 +317,7 @@ function partB(): void {
   table(["sheet", "CPU time", "per row", "wall", "C2"], rows);
   const hh = best[2].cpu;
   console.log(`    ratio AQ.PH / Henderson–Hasselbalch (CPU time): ${(best[0].cpu / hh).toFixed(2)}× (fixed range), ${(best[1].cpu / hh).toFixed(2)}× (inline array)`);
+  console.log(`    ratio of a custom function returning 7 with the same arguments / Henderson–Hasselbalch: ${(best[3].cpu / hh).toFixed(2)}× (HyperFormula's floor)`);
   console.log("    target: AQ.PH sheet within 2× the Henderson–Hasselbalch sheet's time");
 }
 
@@ -372,9 +429,40 @@ function partD(): void {
     const gz = gzipSync(bytes, { level: 9 }).length;
     return [`dist/${f}`, kB(bytes.length), `${bytes.length.toLocaleString("en-US")} B`, kB(gz), `${gz.toLocaleString("en-US")} B`];
   });
+  const withoutMathjs = build ? buildWithoutMathjs() : null;
+  if (withoutMathjs !== null) {
+    const gz = gzipSync(withoutMathjs, { level: 9 }).length;
+    rows.push(["functions.js, mathjs left out", kB(withoutMathjs.length), `${withoutMathjs.length.toLocaleString("en-US")} B`, kB(gz), `${gz.toLocaleString("en-US")} B`]);
+  }
   table(["bundle", "minified", "bytes", "gzip", "bytes"], rows);
-  if (stale) console.log("    NOTE: dist/ is older than the newest file in src/: these sizes may be stale");
+  if (withoutMathjs !== null) {
+    const full = statSync(join(dist, "functions.js")).size;
+    console.log(`    mathjs (unit parsing: Unit with its BigNumber, Complex, Fraction and typed-function dependencies) is ${kB(full - withoutMathjs.length)} of dist/functions.js`);
+  }
+  if (stale) console.log("    NOTE: a file in src/ changed after dist/ was built: these sizes may be stale");
   console.log("    target: functions bundle ≤ 300 kB minified");
+}
+
+/**
+ * The functions bundle built again with mathjs declared external (the same configuration otherwise,
+ * into a temporary folder): the difference is what mathjs costs. Null if the build fails.
+ */
+function buildWithoutMathjs(): Buffer | null {
+  const out = mkdtempSync(join(tmpdir(), "protolyte-bench-"));
+  const config = join(out, "webpack.no-mathjs.js");
+  writeFileSync(
+    config,
+    [
+      `const base = require(${JSON.stringify(join(root, "webpack.config.js"))})({}, { mode: "production" });`,
+      `module.exports = { ...base, context: ${JSON.stringify(root)}, externals: { mathjs: "mathjs" }, output: { ...base.output, path: ${JSON.stringify(join(out, "dist"))}, clean: true } };`,
+    ].join("\n"),
+  );
+  console.log("    building again with mathjs external, into a temporary folder");
+  const r = spawnSync("npx", ["webpack", "--config", config, "--mode", "production", "--stats", "errors-only"], { cwd: root, encoding: "utf8" });
+  const file = join(out, "dist", "functions.js");
+  const bytes = r.status === 0 && existsSync(file) ? readFileSync(file) : null;
+  rmSync(out, { recursive: true, force: true });
+  return bytes;
 }
 
 // ---- main ----------------------------------------------------------------------------------
