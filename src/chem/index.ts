@@ -35,3 +35,4 @@ export { apparentPKa, osmolarity, ionicStrength } from "./derived";
 export { classifyRegime } from "./regime";
 export { parseQuantity, type QuantityDimension, type ParseOptions } from "./units";
 export * from "./workflows";
+export { activityModelNamed } from "./activity/names";

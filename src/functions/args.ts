@@ -3,7 +3,7 @@
  * optional arguments as null, and empty cells as "" (or 0 for number ranges). Every problem becomes
  * a #VALUE! error whose message names the argument, the cell and what is wrong.
  */
-import { parseQuantity } from "../chem";
+import { activityModelNamed, parseQuantity } from "../chem";
 import type { ActivityModel } from "../chem/types";
 import { badInput } from "./errors";
 
@@ -104,21 +104,11 @@ export function temperature(value: Cell): number {
   return t;
 }
 
-const ACTIVITY_NAMES: Record<string, ActivityModel> = {
-  davies: "davies",
-  ideal: "ideal",
-  none: "ideal",
-  "debye-huckel": "debye-huckel",
-  "debye-hückel": "debye-huckel",
-  "debye huckel": "debye-huckel",
-  "extended debye-huckel": "debye-huckel",
-};
-
 /** "davies" (default), "ideal" or "debye-huckel". */
 export function activity(value: Cell): ActivityModel {
   if (isBlank(value)) return "davies";
   const key = text(value, "activity").toLowerCase();
-  const model = ACTIVITY_NAMES[key];
+  const model = activityModelNamed(key);
   if (model === undefined) throw badInput(`activity '${key}' is not known: use "davies", "ideal" or "debye-huckel"`);
   return model;
 }

@@ -4,7 +4,7 @@
  * (tryit.ts). Pairing follows the AQ functions: names and amounts of the same shape, cell by cell,
  * rows with both cells blank skipped. Pure.
  */
-import type { ActivityModel } from "../../chem";
+import { activityModelNamed, type ActivityModel } from "../../chem";
 import type { TryRow } from "../tryit";
 import type { CellValue } from "./aq-call";
 
@@ -29,16 +29,6 @@ export interface MixtureSpec {
 }
 
 export type SpecResult = { ok: true; spec: MixtureSpec } | { ok: false; message: string };
-
-const ACTIVITY: Record<string, ActivityModel> = {
-  davies: "davies",
-  ideal: "ideal",
-  none: "ideal",
-  "debye-huckel": "debye-huckel",
-  "debye-hückel": "debye-huckel",
-  "debye huckel": "debye-huckel",
-  "extended debye-huckel": "debye-huckel",
-};
 
 function blank(v: CellValue | undefined): boolean {
   return v === null || v === undefined || (typeof v === "string" && v.trim() === "");
@@ -95,8 +85,9 @@ export function mixtureFromValues(names: CellValue[][], amounts: CellValue[][], 
   let model: ActivityModel = "davies";
   if (!blank(m.value)) {
     const key = String(m.value).trim().toLowerCase();
-    if (!(key in ACTIVITY)) return { ok: false, message: `the activity model '${key}' is not known (davies, ideal or debye-huckel)` };
-    model = ACTIVITY[key];
+    const named = activityModelNamed(key);
+    if (named === undefined) return { ok: false, message: `the activity model '${key}' is not known (davies, ideal or debye-huckel)` };
+    model = named;
   }
   return { ok: true, spec: { rows, temperature: blank(t.value) ? "" : String(t.value).trim(), activity: model } };
 }
