@@ -74,3 +74,90 @@ describe("parseQuantity explains what is wrong", () => {
     expect(parseQuantity(Infinity, "concentration")).toMatchObject({ ok: false, code: "bad-input" });
   });
 });
+
+describe("parseQuantity reads the other ways a recipe writes units", () => {
+  // Expected values follow from the SI prefixes and 1 L = 1 dm³ = 1000 cm³ (BIPM, SI Brochure,
+  // 9th edition 2019, Tables 7 and 8); 0 °C = 273.15 K; °F = 9/5 °C + 32 (definition).
+  test.each([
+    { text: "0.1 mol L-1", dim: "concentration", expected: 0.1 },
+    { text: "0.1 mol·L⁻¹", dim: "concentration", expected: 0.1 },
+    { text: "0.1 mol L^-1", dim: "concentration", expected: 0.1 },
+    { text: "0.1 mol/dm3", dim: "concentration", expected: 0.1 },
+    { text: "0.1 mol dm-3", dim: "concentration", expected: 0.1 },
+    { text: "25 mmol / L", dim: "concentration", expected: 0.025 },
+    { text: "250 nM", dim: "concentration", expected: 2.5e-7 },
+    { text: "25mM", dim: "concentration", expected: 0.025 },
+    { text: "+25 mM", dim: "concentration", expected: 0.025 },
+    { text: "2.5e1 mM", dim: "concentration", expected: 0.025 },
+    { text: "5 μM", dim: "concentration", expected: 5e-6 },
+    { text: "250 cm3", dim: "volume", expected: 0.25 },
+    { text: "250 cm³", dim: "volume", expected: 0.25 },
+    { text: "2 dm3", dim: "volume", expected: 2 },
+    { text: "0.8 m3", dim: "volume", expected: 800 },
+    { text: "250 ml", dim: "volume", expected: 0.25 },
+    { text: "50 uL", dim: "volume", expected: 5e-5 },
+    { text: "2 litres", dim: "volume", expected: 2 },
+    { text: "500 millilitres", dim: "volume", expected: 0.5 },
+    { text: "5 dL", dim: "volume", expected: 0.5 },
+    { text: "98.6 degF", dim: "temperature", expected: 37 },
+    { text: "37°C", dim: "temperature", expected: 37 },
+    { text: "37 deg C", dim: "temperature", expected: 37 },
+    { text: "37 ℃", dim: "temperature", expected: 37 },
+    { text: "-4 °C", dim: "temperature", expected: -4 },
+    { text: "750 umol", dim: "amount", expected: 7.5e-4 },
+  ] as const)("$text as $dim → $expected", ({ text, dim, expected }) => {
+    const r = parseQuantity(text, dim);
+    if (!r.ok) throw new Error(`${text}: ${r.message}`);
+    expectRel(r.value, expected, RT, `parseQuantity("${text}", "${dim}")`);
+  });
+
+  test.each([
+    { text: "500 ug/mL", dim: "concentration", molarMass: 50, expected: 0.01 },
+    { text: "0.5 g/dm3", dim: "concentration", molarMass: 50, expected: 0.01 },
+    { text: "1.2 kg", dim: "amount", molarMass: 120, expected: 10 },
+    { text: "24 mg", dim: "amount", molarMass: 120, expected: 2e-4 },
+  ] as const)("$text with molar mass $molarMass g/mol → $expected", ({ text, dim, molarMass, expected }) => {
+    const r = parseQuantity(text, dim, { molarMass });
+    if (!r.ok) throw new Error(`${text}: ${r.message}`);
+    expectRel(r.value, expected, RT, `parseQuantity("${text}", "${dim}", {molarMass: ${molarMass}})`);
+  });
+
+  test("every SI prefix on M, mol/L and L scales by its power of ten", () => {
+    const prefixes: Array<[string, number]> = [["k", 3], ["d", -1], ["c", -2], ["m", -3], ["u", -6], ["µ", -6], ["n", -9], ["p", -12]];
+    for (const [p, power] of prefixes) {
+      const conc = parseQuantity(`3 ${p}M`, "concentration");
+      const perL = parseQuantity(`3 ${p}mol/L`, "concentration");
+      const vol = parseQuantity(`3 ${p}L`, "volume");
+      for (const r of [conc, perL, vol]) {
+        if (!r.ok) throw new Error(`${p}: ${r.message}`);
+        expectRel(r.value, 3 * 10 ** power, RT, `prefix ${p}`);
+      }
+    }
+  });
+});
+
+describe("parseQuantity names the problem in unit text", () => {
+  test.each([
+    { text: "25 mm", dim: "concentration", says: /case-sensitive.*"mM"/ },
+    { text: "25 MM", dim: "concentration", says: /unknown unit "MM".*"mM"/ },
+    { text: "1,5 mM", dim: "concentration", says: /decimal point/ },
+    { text: "25 mmol/kg", dim: "concentration", says: /not a concentration/ },
+    { text: "25 mol/", dim: "concentration", says: /ends with "\/"/ },
+    { text: "25 /L", dim: "concentration", says: /misplaced "\/"/ },
+    { text: "25 mol//L", dim: "concentration", says: /misplaced/ },
+    { text: "-300 degC", dim: "temperature", says: /absolute zero/ },
+    { text: "37 degC", dim: "concentration", says: /not a concentration/ },
+    { text: "37 degC/L", dim: "concentration", says: /temperature unit/ },
+    { text: "1e999 mM", dim: "concentration", says: /too large/ },
+    { text: "25 % mM", dim: "concentration", says: /followed by a unit|not a unit/ },
+    { text: "abc", dim: "concentration", says: /does not start with a number/ },
+    { text: "K", dim: "temperature", says: /no number/ },
+  ] as const)("$text as $dim", ({ text, dim, says }) => {
+    const r = parseQuantity(text, dim);
+    expect(r.ok).toBe(false);
+    if (!r.ok) {
+      expect(r.code).toBe("bad-input");
+      expect(r.message).toMatch(says);
+    }
+  });
+});
