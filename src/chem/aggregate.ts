@@ -26,6 +26,15 @@ function isNonNegative(x: unknown): x is number {
   return typeof x === "number" && Number.isFinite(x) && x >= 0;
 }
 
+/** What is wrong with one pKa step, or null. */
+function stepProblem(s: AcidBaseSystem["steps"][number] | undefined): { code: "bad-input" | "out-of-range"; text: string } | null {
+  if (typeof s?.pKa !== "number" || !Number.isFinite(s.pKa)) return { code: "bad-input", text: " has no finite pKa." };
+  if (s.pKa < -20 || s.pKa > 40) return { code: "out-of-range", text: `: pKa ${fmt(s.pKa)} is outside −20…40.` };
+  if (s.dH !== undefined && !Number.isFinite(s.dH)) return { code: "bad-input", text: ": ΔrH° is not a finite number." };
+  if (s.dCp !== undefined && !Number.isFinite(s.dCp)) return { code: "bad-input", text: ": ΔrCp° is not a finite number." };
+  return null;
+}
+
 function checkSystem(sys: AcidBaseSystem, where: string): Failure | null {
   if (!sys || typeof sys.id !== "string") return fail("bad-input", `${where}: an acid–base system has no id.`);
   if (!Number.isInteger(sys.topCharge)) {
@@ -35,12 +44,9 @@ function checkSystem(sys: AcidBaseSystem, where: string): Failure | null {
     return fail("bad-input", `${where}: system "${sys.id}" has no pKa steps.`);
   }
   for (let j = 0; j < sys.steps.length; j++) {
-    const s = sys.steps[j];
-    const label = `${where}: system "${sys.id}" step ${j + 1}`;
-    if (typeof s?.pKa !== "number" || !Number.isFinite(s.pKa)) return fail("bad-input", `${label} has no finite pKa.`);
-    if (s.pKa < -20 || s.pKa > 40) return fail("out-of-range", `${label}: pKa ${fmt(s.pKa)} is outside −20…40.`);
-    if (s.dH !== undefined && !Number.isFinite(s.dH)) return fail("bad-input", `${label}: ΔrH° is not a finite number.`);
-    if (s.dCp !== undefined && !Number.isFinite(s.dCp)) return fail("bad-input", `${label}: ΔrCp° is not a finite number.`);
+    // The message is built only when a step is wrong: this check runs for every mixture a sheet prepares.
+    const problem = stepProblem(sys.steps[j]);
+    if (problem !== null) return fail(problem.code, `${where}: system "${sys.id}" step ${j + 1}${problem.text}`);
   }
   if (sys.speciesNames !== undefined && sys.speciesNames.length !== sys.steps.length + 1) {
     return fail("bad-input", `${where}: system "${sys.id}" needs ${sys.steps.length + 1} species names, has ${sys.speciesNames.length}.`);
@@ -74,11 +80,13 @@ export function aggregate(mix: Mixture): Aggregate | Failure {
     if (!Number.isFinite(c) || c > DEFAULTS.maxConcentration) {
       return fail("out-of-range", `Concentration of ${name} (${fmt(c)} mol/L) is above ${DEFAULTS.maxConcentration} mol/L.`);
     }
-    for (const { system, stoich } of comp.systems) {
+    for (let k = 0; k < comp.systems.length; k++) {
+      const { system, stoich } = comp.systems[k];
       if (!isNonNegative(stoich)) return fail("bad-input", `${name}: stoichiometry of a system must be a number ≥ 0.`);
       const bad = checkSystem(system, name);
       if (bad) return bad;
-      const i = systems.findIndex((s) => s.id === system.id);
+      let i = systems.length - 1;
+      while (i >= 0 && systems[i].id !== system.id) i--;
       if (i < 0) {
         systems.push(system);
         totals.push(c * stoich);
@@ -88,12 +96,14 @@ export function aggregate(mix: Mixture): Aggregate | Failure {
         totals[i] += c * stoich;
       }
     }
-    for (const { ion, stoich } of comp.ions) {
+    for (let k = 0; k < comp.ions.length; k++) {
+      const { ion, stoich } = comp.ions[k];
       if (!isNonNegative(stoich)) return fail("bad-input", `${name}: stoichiometry of an ion must be a number ≥ 0.`);
       if (!ion || typeof ion.id !== "string" || !Number.isInteger(ion.charge)) {
         return fail("bad-input", `${name}: a strong ion needs an id and an integer charge.`);
       }
-      const i = ions.findIndex((x) => x.ion.id === ion.id);
+      let i = ions.length - 1;
+      while (i >= 0 && ions[i].ion.id !== ion.id) i--;
       if (i < 0) ions.push({ ion, conc: c * stoich });
       else if (ions[i].ion.charge !== ion.charge) {
         return fail("bad-input", `${name}: ion "${ion.id}" appears with two different charges.`);

@@ -32,11 +32,12 @@ export function bufferValue(core: ChargeBalanceSolver): number {
   let covKQ = 0;
   let covWQ = 0;
   for (let s = 0; s < core.nSys; s++) {
-    const C = core.totals[s];
+    const C = core.total(s);
     if (C === 0) continue;
-    const o = core.offset[s];
-    const n = core.nSteps[s];
-    const z0 = core.topCharge[s];
+    const d = core.data;
+    const o = core.kcIndex(s);
+    const n = core.stepCount(s);
+    const z0 = core.topChargeOf(s);
     // First pass: means of k, w and z² over the species (relative amounts t_k, rescaled against
     // overflow as in the solver). Second pass: variance and covariances as sums of products of
     // deviations, which avoids cancellation.
@@ -46,7 +47,7 @@ export function bufferValue(core: ChargeBalanceSolver): number {
     let sw = 0;
     let sq = z0 * z0;
     for (let k = 1; k <= n; k++) {
-      t *= core.kc[o + k - 1] * invH;
+      t *= d[o + k - 1] * invH;
       const z = z0 - k;
       s0 += t;
       sk += k * t;
@@ -71,7 +72,7 @@ export function bufferValue(core: ChargeBalanceSolver): number {
     let vwq = -wBar * (z0 * z0 - qBar);
     t = 1;
     for (let k = 1; k <= n; k++) {
-      t *= core.kc[o + k - 1] * invH;
+      t *= d[o + k - 1] * invH;
       const z = z0 - k;
       const dk = k - kBar;
       const dw = z0 * z0 - z * z - k - wBar;

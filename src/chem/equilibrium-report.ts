@@ -32,13 +32,13 @@ export function buildEquilibrium(core: ChargeBalanceSolver, agg: Aggregate): Equ
   let hasSystem = false;
   for (let s = 0; s < core.nSys; s++) {
     const sys = agg.systems[s];
-    const C = core.totals[s];
+    const C = core.total(s);
     if (C > 0) hasSystem = true;
-    const o = core.offset[s];
-    const n = core.nSteps[s];
+    const o = core.kcIndex(s);
+    const n = core.stepCount(s);
     // Relative amounts in log space: robust for any pKa/h combination, run once per report.
     const logT: number[] = [0];
-    for (let k = 1; k <= n; k++) logT.push(logT[k - 1] + Math.log(core.kc[o + k - 1]) - x);
+    for (let k = 1; k <= n; k++) logT.push(logT[k - 1] + Math.log(core.data[o + k - 1]) - x);
     const top = Math.max(...logT);
     const rel = logT.map((v) => Math.exp(v - top));
     const sum = rel.reduce((a, b) => a + b, 0);
@@ -64,7 +64,7 @@ export function buildEquilibrium(core: ChargeBalanceSolver, agg: Aggregate): Equ
   const warnings: string[] = [];
   const wI = ionicStrengthWarning(I, core.model);
   if (wI) warnings.push(wI);
-  warnings.push(...missingEnthalpyWarnings(agg.systems, core.totals, core.temperatureC, pH));
+  warnings.push(...missingEnthalpyWarnings(agg.systems, agg.totals, core.temperatureC, pH));
   return {
     ok: true,
     pH,

@@ -1,7 +1,7 @@
 /**
  * The numerical core: the charge balance in ln[H⁺] at fixed conditional constants, and the
- * ionic-strength iteration around it. One instance per prepared mixture; every array is allocated
- * once, in the constructor, and the inner loops allocate nothing.
+ * ionic-strength iteration around it. One instance per prepared mixture; its one array of numbers
+ * is allocated once, in the constructor, and the inner loops allocate nothing.
  *
  * Charge balance (x = ln h, h = [H⁺] in mol/L, conditional constants at the current I):
  *   F(x) = h − K′w/h + Q + Σ_s C_s·Σ_k z_k·α_k(h) = 0,
@@ -34,19 +34,28 @@ const EPS = 2.220446049250313e-16;
 
 export class ChargeBalanceSolver {
   readonly nSys: number;
-  readonly totals: Float64Array;
-  readonly topCharge: Float64Array;
-  readonly nSteps: Int32Array;
-  readonly offset: Int32Array;
-  readonly pKa25: Float64Array;
-  readonly dH: Float64Array;
-  readonly dCp: Float64Array;
-  /** Per step j (1-based within its system): z0 − j, the exponent of exp(2g) in the conditional constant. */
-  readonly stepExponent: Float64Array;
-  /** Thermodynamic Ka at the current temperature. */
-  readonly kaT: Float64Array;
-  /** Conditional (concentration) Ka at the current temperature and ionic strength. */
-  readonly kc: Float64Array;
+  /**
+   * Every per-system and per-step number in one array, so that preparing a mixture makes one array
+   * rather than ten typed arrays (a 10 000-row what-if table prepares 10 000 mixtures; each typed
+   * array cost about 200 bytes of heap and a backing store for the garbage collector to sweep).
+   * Regions, n = nSys systems and m steps in all:
+   *   [0, n)       total mol/L of system s           [n, 2n)   z0, charge of its fully protonated form
+   *   [2n, 3n)     number of steps of system s       [3n, 4n)  index of its first step (0…m−1)
+   * then, each m long, from the offsets below: pKa at 25 °C, ΔrH° (kJ/mol), ΔrCp° (J/(K·mol)), the
+   * exponent z0 − j of exp(2g) in the conditional constant of step j (1-based within its system),
+   * the thermodynamic Ka at the current temperature, and the conditional (concentration) Ka at the
+   * current temperature and ionic strength.
+   */
+  readonly data: number[];
+  /** Number of steps over all systems. */
+  readonly nStepsTotal: number;
+  private readonly pKaAt: number;
+  private readonly dHAt: number;
+  private readonly dCpAt: number;
+  private readonly exponentAt: number;
+  private readonly kaTAt: number;
+  /** Start of the conditional constants in `data`: the Ka′ of step j of system s is data[kcAt + firstStep(s) + j − 1]. */
+  readonly kcAt: number;
   /** Σ z·c of the strong ions, mol/L. */
   readonly strongCharge: number;
   /** ½ Σ z²·c of the strong ions, mol/L. */
@@ -78,40 +87,44 @@ export class ChargeBalanceSolver {
   evaluations = 0;
   outerIterations = 0;
 
-  constructor(systems: AcidBaseSystem[], totals: number[], strongCharge: number, strongIonic: number, strongAbs: number) {
+  constructor(systems: readonly AcidBaseSystem[], totals: readonly number[], strongCharge: number, strongIonic: number, strongAbs: number) {
     const n = systems.length;
     this.nSys = n;
-    this.totals = Float64Array.from(totals);
-    this.topCharge = new Float64Array(n);
-    this.nSteps = new Int32Array(n);
-    this.offset = new Int32Array(n);
-    let steps = 0;
-    for (let s = 0; s < n; s++) {
-      this.offset[s] = steps;
-      this.nSteps[s] = systems[s].steps.length;
-      this.topCharge[s] = systems[s].topCharge;
-      steps += systems[s].steps.length;
-    }
-    this.pKa25 = new Float64Array(steps);
-    this.dH = new Float64Array(steps);
-    this.dCp = new Float64Array(steps);
-    this.stepExponent = new Float64Array(steps);
-    this.kaT = new Float64Array(steps);
-    this.kc = new Float64Array(steps);
+    let m = 0;
+    for (let s = 0; s < n; s++) m += systems[s].steps.length;
+    this.nStepsTotal = m;
+    this.pKaAt = 4 * n;
+    this.dHAt = this.pKaAt + m;
+    this.dCpAt = this.dHAt + m;
+    this.exponentAt = this.dCpAt + m;
+    this.kaTAt = this.exponentAt + m;
+    this.kcAt = this.kaTAt + m;
+    // A plain array of doubles (NaN until set keeps V8's packed-double kind from the start): on the
+    // JS heap, unlike a typed array's separate backing store, and half the time to make.
+    const d: number[] = [];
+    for (let i = this.kcAt + m; i > 0; i--) d.push(NaN);
+    this.data = d;
     let pMax = strongCharge;
     let capacity = 0;
+    let first = 0;
     for (let s = 0; s < n; s++) {
       const sys = systems[s];
-      const C = this.totals[s];
+      const C = totals[s];
       const z0 = sys.topCharge;
       const ns = sys.steps.length;
+      d[s] = C;
+      d[n + s] = z0;
+      d[2 * n + s] = ns;
+      d[3 * n + s] = first;
       for (let j = 0; j < ns; j++) {
-        const i = this.offset[s] + j;
-        this.pKa25[i] = sys.steps[j].pKa;
-        this.dH[i] = sys.steps[j].dH ?? 0;
-        this.dCp[i] = sys.steps[j].dCp ?? 0;
-        this.stepExponent[i] = z0 - (j + 1);
+        const step = sys.steps[j];
+        const i = first + j;
+        d[this.pKaAt + i] = step.pKa;
+        d[this.dHAt + i] = step.dH ?? 0;
+        d[this.dCpAt + i] = step.dCp ?? 0;
+        d[this.exponentAt + i] = z0 - (j + 1);
       }
+      first += ns;
       pMax += C * z0;
       capacity += C * ns;
     }
@@ -122,12 +135,33 @@ export class ChargeBalanceSolver {
     this.pMin = pMax - capacity;
   }
 
+  /** Total mol/L of system s. */
+  total(s: number): number {
+    return this.data[s];
+  }
+
+  /** z0 of system s: the charge of its fully protonated form. */
+  topChargeOf(s: number): number {
+    return this.data[this.nSys + s];
+  }
+
+  /** Number of pKa steps of system s. */
+  stepCount(s: number): number {
+    return this.data[2 * this.nSys + s];
+  }
+
+  /** Index in `data` of the conditional Ka′ of the first step of system s (the others follow). */
+  kcIndex(s: number): number {
+    return this.kcAt + this.data[3 * this.nSys + s];
+  }
+
   /** Sets Kw, A and every thermodynamic Ka for a temperature in °C (cached). */
   setTemperature(temperatureC: number): void {
     if (temperatureC === this.temperatureC) return;
     const T = temperatureC + ZERO_CELSIUS_K;
-    for (let i = 0; i < this.kaT.length; i++) {
-      this.kaT[i] = Math.exp(-LN10 * pKaAtTemperature(this.pKa25[i], this.dH[i], this.dCp[i], T));
+    const d = this.data;
+    for (let i = 0; i < this.nStepsTotal; i++) {
+      d[this.kaTAt + i] = Math.exp(-LN10 * pKaAtTemperature(d[this.pKaAt + i], d[this.dHAt + i], d[this.dCpAt + i], T));
     }
     this.kwT = kw(temperatureC);
     this.debyeA = debyeHuckelA(temperatureC);
@@ -140,7 +174,8 @@ export class ChargeBalanceSolver {
     this.ionicStrength = I;
     this.lnGamma1 = g;
     const twoG = 2 * g;
-    for (let i = 0; i < this.kc.length; i++) this.kc[i] = this.kaT[i] * Math.exp(twoG * this.stepExponent[i]);
+    const d = this.data;
+    for (let i = 0; i < this.nStepsTotal; i++) d[this.kcAt + i] = d[this.kaTAt + i] * Math.exp(twoG * d[this.exponentAt + i]);
     this.kwc = this.kwT * Math.exp(-twoG);
   }
 
@@ -162,21 +197,21 @@ export class ChargeBalanceSolver {
     let dF = h + oh;
     let zz = h + oh;
     let abs = h + oh + this.strongAbs;
-    const totals = this.totals;
-    const kc = this.kc;
-    for (let s = 0; s < this.nSys; s++) {
-      const C = totals[s];
+    const d = this.data;
+    const nSys = this.nSys;
+    for (let s = 0; s < nSys; s++) {
+      const C = d[s];
       if (C === 0) continue;
-      const o = this.offset[s];
-      const n = this.nSteps[s];
-      const z0 = this.topCharge[s];
+      const z0 = d[nSys + s];
+      const n = d[2 * nSys + s];
+      const o = this.kcAt + d[3 * nSys + s];
       let t = 1;
       let s0 = 1;
       let sz = z0;
       let szz = z0 * z0;
       let sa = z0 < 0 ? -z0 : z0;
       for (let k = 1; k <= n; k++) {
-        t *= kc[o + k - 1] * invH;
+        t *= d[o + k - 1] * invH;
         const z = z0 - k;
         s0 += t;
         sz += z * t;

@@ -88,25 +88,30 @@ function rectangular(value: Cell): value is unknown[][] {
   return true;
 }
 
-/** One name/amount pair, `where` built only when a message needs it. */
+/**
+ * One name/amount pair at (row, col) of ranges of the given shape. The position text is built only
+ * when a message needs it (no closure per cell: a sheet reads thousands of these).
+ */
 function readPair(
   entries: { component: Component; conc: number }[],
   nameCell: Cell,
   amount: Cell,
-  where: () => string,
+  row: number,
+  col: number,
+  shape: [number, number],
 ): void {
   if (isBlank(nameCell)) {
-    if (!isBlank(amount) && amount !== 0) throw badInput(`amount ${String(amount)}${where()} has no substance name beside it`);
+    if (!isBlank(amount) && amount !== 0) throw badInput(`amount ${String(amount)}${position(row, col, shape)} has no substance name beside it`);
     return;
   }
-  const name = typeof nameCell === "string" ? nameCell.trim() : text(nameCell, `name${where()}`);
+  const name = typeof nameCell === "string" ? nameCell.trim() : text(nameCell, `name${position(row, col, shape)}`);
   const component = resolveComponent(name);
-  if (isBlank(amount)) throw badInput(`no amount for '${name}'${where()}`);
+  if (isBlank(amount)) throw badInput(`no amount for '${name}'${position(row, col, shape)}`);
   const conc =
     typeof amount === "number" && Number.isFinite(amount) && amount >= 0
       ? amount // what quantity() returns for a plain non-negative number, without building its messages
-      : quantity(amount, `amount of '${name}'${where()}`, "concentration", { molarMass: component.molarMass });
-  if (conc < 0) throw badInput(`amount of '${name}'${where()} is negative (${conc} mol/L)`);
+      : quantity(amount, `amount of '${name}'${position(row, col, shape)}`, "concentration", { molarMass: component.molarMass });
+  if (conc < 0) throw badInput(`amount of '${name}'${position(row, col, shape)} is negative (${conc} mol/L)`);
   entries.push({ component, conc });
 }
 
@@ -124,7 +129,7 @@ export function readEntries(names: Cell, amounts: Cell): { component: Component;
     for (let r = 0; r < rows; r++) {
       const nRow = names[r];
       const aRow = amounts[r];
-      for (let c = 0; c < cols; c++) readPair(entries, nRow[c], aRow[c], () => position(r, c, shape));
+      for (let c = 0; c < cols; c++) readPair(entries, nRow[c], aRow[c], r, c, shape);
     }
   } else {
     const nShape = shapeOf(names);
@@ -134,7 +139,7 @@ export function readEntries(names: Cell, amounts: Cell): { component: Component;
     }
     const nameCells = cellsOf(names);
     const amountCells = cellsOf(amounts);
-    nameCells.forEach((cell, i) => readPair(entries, cell.value, amountCells[i]?.value, () => position(cell.row, cell.col, nShape)));
+    nameCells.forEach((cell, i) => readPair(entries, cell.value, amountCells[i]?.value, cell.row, cell.col, nShape));
   }
   if (entries.length === 0) throw badInput("the mixture is empty: give at least one substance name with its amount");
   return entries;
