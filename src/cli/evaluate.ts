@@ -4,6 +4,7 @@
  * value with its message — the same things a user sees in Excel.
  */
 import { DetailedCellError, HyperFormula, type RawCellContent } from "hyperformula";
+import { installEdgeIndex } from "./hf-edge-index";
 import { registerAqFunctions, TABLE_FUNCTIONS } from "./hf-plugin";
 
 export type CellResult = number | string | boolean | null | { error: string; message: string };
@@ -57,6 +58,7 @@ function resizeTables(hf: HyperFormula, sheets: Record<string, RawCellContent[][
 /** Builds an engine holding the given sheets (name → rows of raw cell contents), every table sized. */
 export function buildEngine(sheets: Record<string, RawCellContent[][]>): HyperFormula {
   registerAqFunctions();
+  installEdgeIndex();
   const hf = HyperFormula.buildFromSheets(sheets, CONFIG);
   resizeTables(hf, sheets);
   return hf;

@@ -42,9 +42,26 @@ function toExcelScalar(value: unknown): unknown {
   return value;
 }
 
+/** True when every cell is a plain number, text or boolean: what Excel passes for such a range. */
+function plainRows(rows: readonly (readonly unknown[])[]): boolean {
+  for (let r = 0; r < rows.length; r++) {
+    const row = rows[r];
+    for (let c = 0; c < row.length; c++) {
+      const t = typeof row[c];
+      if (t !== "number" && t !== "string" && t !== "boolean") return false;
+    }
+  }
+  return true;
+}
+
 function toExcelArgument(value: unknown, optional: boolean): unknown {
   if (value === undefined) return optional ? null : "";
-  if (value instanceof SimpleRangeValue) return value.data.map((row) => row.map(toExcelScalar));
+  if (value instanceof SimpleRangeValue) {
+    const rows = value.data as unknown[][];
+    // Plain cells pass as they are, without a copy per call (the AQ functions never modify their
+    // arguments); blanks, errors and rich numbers (dates, percentages) are converted.
+    return plainRows(rows) ? rows : rows.map((row) => row.map(toExcelScalar));
+  }
   return toExcelScalar(value);
 }
 
