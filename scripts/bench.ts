@@ -6,8 +6,7 @@
  *   (b) a 10 000-row what-if sheet in the embedded spreadsheet engine (HyperFormula): =AQ.PH(...)
  *       per row against the same sheet computing the closed-form Henderson–Hasselbalch value with
  *       built-in functions (the comparison baseline only; the engine never uses that shortcut);
- *   (c) AQ.ADJUST and AQ.RECIPE calls per second (the chem workflows directly while the AQ functions
- *       are not wired yet — the output says which);
+ *   (c) AQ.ADJUST and AQ.RECIPE calls per second;
  *   (d) production bundle sizes, raw and gzip (builds first unless --no-build);
  *   (e) the batching pattern for Excel, simulated, against synchronous calls.
  *
@@ -23,7 +22,6 @@ import { join } from "node:path";
 import { gzipSync } from "node:zlib";
 import { FunctionArgumentType, FunctionPlugin, HyperFormula, SimpleRangeValue } from "hyperformula";
 import { prepare, solvePH, type ActivityModel, type Component, type Mixture } from "../src/chem";
-import * as workflows from "../src/chem/workflows";
 import { evaluateSheets } from "../src/cli/evaluate";
 import { installEdgeIndex, uninstallEdgeIndex } from "../src/cli/hf-edge-index";
 import * as AQ from "../src/functions/functions";
@@ -114,7 +112,7 @@ console.log("Protolyte benchmark (npm run bench)");
 console.log(`date:    ${new Date().toISOString()}`);
 console.log(`machine: ${cpuList[0]?.model ?? "unknown cpu"}, ${cpuList.length} logical cores; node ${process.version} (${process.platform} ${process.arch})`);
 console.log(`load:    ${loadavg().map((x) => x.toFixed(2)).join(" / ")} (1 / 5 / 15 min load average at start: other processes share the cores)`);
-console.log(`method:  CPU time of this process (user + system); best of ${RUNS} timed runs after a warm-up; single-threaded code; ${typeof (globalThis as { gc?: unknown }).gc === "function" ? "a full garbage collection before each sheet of part (b)" : "run without --expose-gc: no garbage collection between sheets"}`);
+console.log(`method:  CPU time of this process (user + system); best of ${RUNS} timed runs after a warm-up; single-threaded code`);
 console.log(`library: ${getActiveLibrary().fingerprint()}`);
 
 // ---- (a) engine ----------------------------------------------------------------------------
@@ -124,7 +122,7 @@ interface MixCase {
   /** 35 slightly different mixtures, cycled so that nothing can be answered from a cache. */
   variants: Mixture[];
 }
-console.log(`method:  CPU time of this process (user + system); best of ${RUNS} timed runs after a warm-up; single-threaded code`);
+
 const VARIANTS = 35;
 
 function variants(make: (i: number) => Mixture): Mixture[] {
@@ -373,64 +371,24 @@ function aqFunction(id: string): AnyFn | undefined {
   return typeof fn === "function" ? (fn as AnyFn) : undefined;
 }
 
-function workflow(name: string): AnyFn | undefined {
-  const fn = (workflows as unknown as Record<string, unknown>)[name];
-  return typeof fn === "function" ? (fn as AnyFn) : undefined;
-}
-
-function okValue(r: unknown): number {
-  const v = r as { ok?: boolean; value?: number; pH?: number };
-  if (v && v.ok === false) throw new Error(`bench: workflow failed: ${JSON.stringify(r)}`);
-  return typeof v?.value === "number" ? v.value : typeof v?.pH === "number" ? v.pH : 1;
-}
-
 function partC(): void {
   console.log("\n(c) Workflow functions: calls per second, one core (target pH varied on every call)");
   const rows: string[][] = [];
   const targets = Array.from({ length: 101 }, (_, i) => 6.8 + i * 0.005);
 
   const ADJUST = aqFunction("ADJUST");
-  if (ADJUST) {
-    const names = [["NaH2PO4"], ["Na2HPO4"]];
-    const amounts = [[0.03], [0.02]];
-    const r1 = rate((i) => ADJUST(names, amounts, targets[i % 101], "NaOH") as number);
-    const r2 = rate((i) => ADJUST(names, amounts, targets[i % 101], "NaOH", 1, 800) as number);
-    rows.push(["AQ.ADJUST(phosphate 30/20 mM, target, \"NaOH\")  mol/L", fmtRate(r1), fmtMicro(r1)]);
-    rows.push(["AQ.ADJUST(..., \"NaOH\", 1, 800)  litres of 1 M stock for 800 L", fmtRate(r2), fmtMicro(r2)]);
-  } else {
-    const adjust = workflow("adjust");
-    check(adjust !== undefined, "no adjust workflow");
-    const mix: Mixture = [
-      { component: component("NaH2PO4"), conc: 0.03 },
-      { component: component("Na2HPO4"), conc: 0.02 },
-    ];
-    const naoh = component("NaOH");
-    const r1 = rate((i) => okValue(adjust!(mix, naoh, targets[i % 101], {})));
-    const r2 = rate((i) => okValue(adjust!(mix, naoh, targets[i % 101], { stock: { conc: 1, volume: 800 } })));
-    rows.push(["[chem workflow, AQ.ADJUST not wired yet] adjust(phosphate 30/20 mM, NaOH, target) mol/L", fmtRate(r1), fmtMicro(r1)]);
-    rows.push(["[chem workflow, AQ.ADJUST not wired yet] adjust(..., stock 1 M, 800 L)", fmtRate(r2), fmtMicro(r2)]);
-  }
-
   const RECIPE = aqFunction("RECIPE");
-  if (RECIPE) {
-    const r1 = rate((i) => ((RECIPE("NaH2PO4", "Na2HPO4", targets[i % 101], 0.05, 1) as unknown[][]).length));
-    const r2 = rate((i) => ((RECIPE("NaH2PO4", "Na2HPO4", targets[i % 101], 0.05, 1, 25, 0.15, "NaCl") as unknown[][]).length));
-    rows.push(["AQ.RECIPE(\"NaH2PO4\", \"Na2HPO4\", target, 0.05, 1)", fmtRate(r1), fmtMicro(r1)]);
-    rows.push(["AQ.RECIPE(..., 25, 0.15, \"NaCl\")  made up to I = 0.15 M", fmtRate(r2), fmtMicro(r2)]);
-  } else {
-    const recipe = workflow("recipe");
-    if (recipe === undefined) {
-      rows.push(["AQ.RECIPE: neither the function nor the chem workflow exists yet", "-", "-"]);
-    } else {
-      const acidForm = component("NaH2PO4");
-      const baseForm = component("Na2HPO4");
-      const salt = component("NaCl");
-      const r1 = rate((i) => okValue(recipe({ acidForm, baseForm, targetPH: targets[i % 101], totalConc: 0.05, volume: 1 }, {})));
-      const r2 = rate((i) => okValue(recipe({ acidForm, baseForm, targetPH: targets[i % 101], totalConc: 0.05, volume: 1, ionicStrength: 0.15, salt }, {})));
-      rows.push(["[chem workflow, AQ.RECIPE not wired yet] recipe(NaH2PO4/Na2HPO4, target, 0.05 M, 1 L)", fmtRate(r1), fmtMicro(r1)]);
-      rows.push(["[chem workflow, AQ.RECIPE not wired yet] recipe(..., I = 0.15 M with NaCl)", fmtRate(r2), fmtMicro(r2)]);
-    }
-  }
+  check(ADJUST !== undefined && RECIPE !== undefined, "AQ.ADJUST and AQ.RECIPE must exist");
+  const names = [["NaH2PO4"], ["Na2HPO4"]];
+  const amounts = [[0.03], [0.02]];
+  const r1 = rate((i) => ADJUST!(names, amounts, targets[i % 101], "NaOH") as number);
+  const r2 = rate((i) => ADJUST!(names, amounts, targets[i % 101], "NaOH", 1, 800) as number);
+  rows.push(["AQ.ADJUST(phosphate 30/20 mM, target, \"NaOH\")  mol/L", fmtRate(r1), fmtMicro(r1)]);
+  rows.push(["AQ.ADJUST(..., \"NaOH\", 1, 800)  litres of 1 M stock for 800 L", fmtRate(r2), fmtMicro(r2)]);
+  const r3 = rate((i) => (RECIPE!("NaH2PO4", "Na2HPO4", targets[i % 101], 0.05, 1) as unknown[][]).length);
+  const r4 = rate((i) => (RECIPE!("NaH2PO4", "Na2HPO4", targets[i % 101], 0.05, 1, 25, 0.15, "NaCl") as unknown[][]).length);
+  rows.push(["AQ.RECIPE(\"NaH2PO4\", \"Na2HPO4\", target, 0.05, 1)", fmtRate(r3), fmtMicro(r3)]);
+  rows.push(["AQ.RECIPE(..., 25, 0.15, \"NaCl\")  made up to I = 0.15 M", fmtRate(r4), fmtMicro(r4)]);
   table(["call", "calls", "per call"], rows);
 }
 
@@ -452,9 +410,11 @@ function kB(bytes: number): string {
 function partD(): void {
   console.log("\n(d) Production bundles (kB = 1000 bytes; gzip level 9)");
   const dist = join(root, "dist");
+  let builtNow = false;
   if (build) {
     console.log("    building: npx webpack --mode production");
     const r = spawnSync("npx", ["webpack", "--mode", "production", "--stats", "errors-warnings"], { cwd: root, encoding: "utf8" });
+    builtNow = r.status === 0;
     if (r.status !== 0) {
       console.log(`    build FAILED (exit ${r.status}); sizes below are of the dist/ already there, if any`);
       console.log((r.stdout + r.stderr).split("\n").slice(0, 20).map((l) => `      ${l}`).join("\n"));
@@ -466,7 +426,9 @@ function partD(): void {
     return;
   }
   const built = Math.min(...files.map((f) => statSync(join(dist, f)).mtimeMs));
-  const stale = built < newestSource(join(root, "src"));
+  // webpack leaves a bundle whose content did not change unwritten, with its old date: after a
+  // successful build here the sizes are current whatever the dates say.
+  const stale = !builtNow && built < newestSource(join(root, "src"));
   const rows = files.map((f) => {
     const bytes = readFileSync(join(dist, f));
     const gz = gzipSync(bytes, { level: 9 }).length;
