@@ -4,7 +4,8 @@
  * Numbers pass through unchanged (they are already in the engine's units). Text is a decimal number
  * followed by a unit: "25 mM", "0.1 M", "100 mmol/L", "0.1 mol L-1", "2.1 g/L", "2.1 mg/mL" (mass
  * concentrations need the molar mass), "500 mL", "1.5 L", "1 dm3", "37 degC" (also "37 °C"),
- * "310.15 K", "2 mmol", "1.5 g" (amount, needs the molar mass).
+ * "310.15 K", "2 mmol", "1.5 g" (amount, needs the molar mass), "0.9 % w/v" (grams per 100 mL,
+ * needs the molar mass).
  *
  * The parser is our own and knows only the units a solution recipe uses: amount (mol), mass (g),
  * volume (L, m³ and their SI prefixes), molar (M = 1 mol/L, common practice) and temperature (K, °C,
@@ -213,6 +214,11 @@ function nonNegative(value: number, dim: QuantityDimension, text: string): Resul
   return { ok: true, value };
 }
 
+/** "% w/v" (also "% m/v"): grams per 100 mL (common practice in formulation), i.e. g/dL. */
+const PERCENT_WV = /^%\s*\(?\s*[wm]\s*\/\s*v\s*\)?$/i;
+/** Other percentages: by mass or by volume (need a density), or with no basis at all. */
+const PERCENT_OTHER = /^%(\s*\(?\s*([wm]\s*\/\s*[wm]|v\s*\/\s*v)\s*\)?)?$/i;
+
 /** The unit text with degree spellings brought to one form: "°C", "º C", "deg C", "℃" → "degC". */
 function normaliseDegrees(unit: string): string {
   return unit
@@ -260,6 +266,18 @@ export function parseQuantity(
   const rest = text.slice(lead[0].length);
   if (rest.startsWith(",")) {
     return fail("bad-input", `Cannot read "${text}" as a ${dimension}: write the number with a decimal point, for example ${EXAMPLES[dimension]}.`);
+  }
+  if (PERCENT_WV.test(unit)) {
+    // 1 % w/v = 1 g per 100 mL = 10 g/L: a mass concentration, converted with the molar mass.
+    const read: Dims = { amount: 0, mass: 1, volume: -1, factor: 10 };
+    const r = convert(x, read, unit, dimension, text, opts?.molarMass);
+    return r.ok ? nonNegative(r.value, dimension, text) : r;
+  }
+  if (PERCENT_OTHER.test(unit)) {
+    return fail(
+      "bad-input",
+      `Cannot read "${text}" as a ${dimension}: only "% w/v" (grams per 100 mL) is understood; a percentage by mass or by volume needs a density, and "%" alone does not say which it is.`,
+    );
   }
   if (!/^[\s\p{L}°º\u2103\u2109]/u.test(rest)) {
     return fail("bad-input", `Cannot read "${text}" as a ${dimension}: a number must be followed by a unit; use for example ${EXAMPLES[dimension]}.`);

@@ -116,6 +116,10 @@ describe("parseQuantity reads the other ways a recipe writes units", () => {
     { text: "0.5 g/dm3", dim: "concentration", molarMass: 50, expected: 0.01 },
     { text: "1.2 kg", dim: "amount", molarMass: 120, expected: 10 },
     { text: "24 mg", dim: "amount", molarMass: 120, expected: 2e-4 },
+    // 1 % w/v = 1 g per 100 mL = 10 g/L (common practice in formulation).
+    { text: "0.9 % w/v", dim: "concentration", molarMass: 60, expected: 0.15 },
+    { text: "0.9% (w/v)", dim: "concentration", molarMass: 60, expected: 0.15 },
+    { text: "1.2 %m/v", dim: "concentration", molarMass: 60, expected: 0.2 },
   ] as const)("$text with molar mass $molarMass g/mol → $expected", ({ text, dim, molarMass, expected }) => {
     const r = parseQuantity(text, dim, { molarMass });
     if (!r.ok) throw new Error(`${text}: ${r.message}`);
@@ -151,6 +155,11 @@ describe("parseQuantity names the problem in unit text", () => {
     { text: "1e999 mM", dim: "concentration", says: /too large/ },
     { text: "25 % mM", dim: "concentration", says: /followed by a unit|not a unit/ },
     { text: "abc", dim: "concentration", says: /does not start with a number/ },
+    { text: "0.9 %", dim: "concentration", says: /"%" alone/ },
+    { text: "5 % w/w", dim: "concentration", says: /needs a density/ },
+    { text: "5 % v/v", dim: "concentration", says: /needs a density/ },
+    { text: "0.9 % w/v", dim: "concentration", says: /molar mass/ },
+    { text: "0.9 % w/v", dim: "volume", says: /not a volume/ },
     { text: "K", dim: "temperature", says: /no number/ },
   ] as const)("$text as $dim", ({ text, dim, says }) => {
     const r = parseQuantity(text, dim);

@@ -47,6 +47,15 @@ describe("argument shapes as Excel passes them", () => {
     expect(a).toBe(b);
   });
 
+  test("mass units take the molar mass from the library: 0.9 % w/v saline = 9 g/L NaCl", () => {
+    // NaCl 58.43977 g/mol from CIAAW standard atomic weights (Na 22.98976928, Cl 35.45 abridged);
+    // 1 % w/v = 1 g per 100 mL (common practice). Ionic strength of a 1:1 salt = its molarity.
+    const ionic = AQ.IONIC([["NaCl"]], [["0.9 % w/v"]], null);
+    expect(ionic).toBeCloseTo(9 / (22.98976928 + 35.45), 5);
+    expect(AQ.IONIC([["NaCl"]], [["9 g/L"]], null)).toBe(ionic);
+    expect(AQ.IONIC([["NaCl"]], [["9 mg/mL"]], null)).toBe(ionic);
+  });
+
   test("names are case- and spacing-insensitive", () => {
     expect(AQ.PH([["  tris   hcl "]], [[0.01]])).toBe(AQ.PH([["Tris HCl"]], [[0.01]]));
   });
