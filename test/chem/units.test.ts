@@ -22,63 +22,8 @@ describe("parseQuantity converts to the engine's units", () => {
     { text: "310.15 K", dim: "temperature", expected: 37 },
     { text: "2 mmol", dim: "amount", expected: 0.002 },
     { text: "0.25", dim: "concentration", expected: 0.25 },
-  ] as const)("$text as $dim → $expected", ({ text, dim, expected }) => {
-    const r = parseQuantity(text, dim);
-    if (!r.ok) throw new Error(`${text}: ${r.message}`);
-    expectRel(r.value, expected, RT, `parseQuantity("${text}", "${dim}")`);
-  });
-
-  test.each([
-    // 2.1 g/L of a substance of 210 g/mol is 0.01 mol/L; the same in mg/mL.
-    { text: "2.1 g/L", dim: "concentration", molarMass: 210, expected: 0.01 },
-    { text: "2.1 mg/mL", dim: "concentration", molarMass: 210, expected: 0.01 },
-    { text: "1.5 g", dim: "amount", molarMass: 150, expected: 0.01 },
-  ] as const)("$text with molar mass $molarMass g/mol → $expected", ({ text, dim, molarMass, expected }) => {
-    const r = parseQuantity(text, dim, { molarMass });
-    if (!r.ok) throw new Error(`${text}: ${r.message}`);
-    expectRel(r.value, expected, RT, `parseQuantity("${text}", "${dim}", {molarMass: ${molarMass}})`);
-  });
-
-  test("numbers pass through unchanged", () => {
-    expect(parseQuantity(0.037, "concentration")).toEqual({ ok: true, value: 0.037 });
-    expect(parseQuantity(-4, "temperature")).toEqual({ ok: true, value: -4 });
-  });
-});
-
-describe("parseQuantity explains what is wrong", () => {
-  test.each([
-    { text: "5 foo", dim: "concentration", says: /foo/ },
-    { text: "5 mL", dim: "concentration", says: /not a concentration/ },
-    { text: "25 mM", dim: "volume", says: /not a volume/ },
-    { text: "2.1 g/L", dim: "concentration", says: /molar mass/ },
-    { text: "1 g", dim: "amount", says: /molar mass/ },
-    { text: "mM", dim: "concentration", says: /no number/ },
-    { text: "-5 mM", dim: "concentration", says: /negative/ },
-    { text: "", dim: "volume", says: /Empty/ },
-  ] as const)("$text as $dim", ({ text, dim, says }) => {
-    const r = parseQuantity(text, dim);
-    expect(r.ok).toBe(false);
-    if (!r.ok) {
-      expect(r.code).toBe("bad-input");
-      expect(r.message).toMatch(says);
-    }
-  });
-
-  test("a non-positive molar mass is rejected", () => {
-    const r = parseQuantity("2 g/L", "concentration", { molarMass: 0 });
-    expect(r).toMatchObject({ ok: false, code: "bad-input" });
-  });
-
-  test("NaN and Infinity are rejected", () => {
-    expect(parseQuantity(NaN, "volume")).toMatchObject({ ok: false, code: "bad-input" });
-    expect(parseQuantity(Infinity, "concentration")).toMatchObject({ ok: false, code: "bad-input" });
-  });
-});
-
-describe("parseQuantity reads the other ways a recipe writes units", () => {
-  // Expected values follow from the SI prefixes and 1 L = 1 dm³ = 1000 cm³ (BIPM, SI Brochure,
-  // 9th edition 2019, Tables 7 and 8); 0 °C = 273.15 K; °F = 9/5 °C + 32 (definition).
-  test.each([
+    // Other ways a recipe writes units: SI prefixes and 1 L = 1 dm³ = 1000 cm³ (BIPM, SI Brochure,
+    // 9th edition 2019, Tables 7 and 8); 0 °C = 273.15 K; °F = 9/5 °C + 32 (definition).
     { text: "0.1 mol L-1", dim: "concentration", expected: 0.1 },
     { text: "0.1 mol·L⁻¹", dim: "concentration", expected: 0.1 },
     { text: "0.1 mol L^-1", dim: "concentration", expected: 0.1 },
@@ -105,13 +50,17 @@ describe("parseQuantity reads the other ways a recipe writes units", () => {
     { text: "37 ℃", dim: "temperature", expected: 37 },
     { text: "-4 °C", dim: "temperature", expected: -4 },
     { text: "750 umol", dim: "amount", expected: 7.5e-4 },
-  ] as const)("$text as $dim → $expected", ({ text, dim, expected }) => {
+    ] as const)("$text as $dim → $expected", ({ text, dim, expected }) => {
     const r = parseQuantity(text, dim);
     if (!r.ok) throw new Error(`${text}: ${r.message}`);
     expectRel(r.value, expected, RT, `parseQuantity("${text}", "${dim}")`);
   });
 
   test.each([
+    // 2.1 g/L of a substance of 210 g/mol is 0.01 mol/L; the same in mg/mL.
+    { text: "2.1 g/L", dim: "concentration", molarMass: 210, expected: 0.01 },
+    { text: "2.1 mg/mL", dim: "concentration", molarMass: 210, expected: 0.01 },
+    { text: "1.5 g", dim: "amount", molarMass: 150, expected: 0.01 },
     { text: "500 ug/mL", dim: "concentration", molarMass: 50, expected: 0.01 },
     { text: "0.5 g/dm3", dim: "concentration", molarMass: 50, expected: 0.01 },
     { text: "1.2 kg", dim: "amount", molarMass: 120, expected: 10 },
@@ -120,7 +69,7 @@ describe("parseQuantity reads the other ways a recipe writes units", () => {
     { text: "0.9 % w/v", dim: "concentration", molarMass: 60, expected: 0.15 },
     { text: "0.9% (w/v)", dim: "concentration", molarMass: 60, expected: 0.15 },
     { text: "1.2 %m/v", dim: "concentration", molarMass: 60, expected: 0.2 },
-  ] as const)("$text with molar mass $molarMass g/mol → $expected", ({ text, dim, molarMass, expected }) => {
+    ] as const)("$text with molar mass $molarMass g/mol → $expected", ({ text, dim, molarMass, expected }) => {
     const r = parseQuantity(text, dim, { molarMass });
     if (!r.ok) throw new Error(`${text}: ${r.message}`);
     expectRel(r.value, expected, RT, `parseQuantity("${text}", "${dim}", {molarMass: ${molarMass}})`);
@@ -138,10 +87,22 @@ describe("parseQuantity reads the other ways a recipe writes units", () => {
       }
     }
   });
+  test("numbers pass through unchanged", () => {
+    expect(parseQuantity(0.037, "concentration")).toEqual({ ok: true, value: 0.037 });
+    expect(parseQuantity(-4, "temperature")).toEqual({ ok: true, value: -4 });
+  });
 });
 
-describe("parseQuantity names the problem in unit text", () => {
+describe("parseQuantity explains what is wrong", () => {
   test.each([
+    { text: "5 foo", dim: "concentration", says: /foo/ },
+    { text: "5 mL", dim: "concentration", says: /not a concentration/ },
+    { text: "25 mM", dim: "volume", says: /not a volume/ },
+    { text: "2.1 g/L", dim: "concentration", says: /molar mass/ },
+    { text: "1 g", dim: "amount", says: /molar mass/ },
+    { text: "mM", dim: "concentration", says: /no number/ },
+    { text: "-5 mM", dim: "concentration", says: /negative/ },
+    { text: "", dim: "volume", says: /Empty/ },
     { text: "25 mm", dim: "concentration", says: /case-sensitive.*"mM"/ },
     { text: "25 MM", dim: "concentration", says: /unknown unit "MM".*"mM"/ },
     { text: "1,5 mM", dim: "concentration", says: /decimal point/ },
@@ -161,12 +122,22 @@ describe("parseQuantity names the problem in unit text", () => {
     { text: "0.9 % w/v", dim: "concentration", says: /molar mass/ },
     { text: "0.9 % w/v", dim: "volume", says: /not a volume/ },
     { text: "K", dim: "temperature", says: /no number/ },
-  ] as const)("$text as $dim", ({ text, dim, says }) => {
+    ] as const)("$text as $dim", ({ text, dim, says }) => {
     const r = parseQuantity(text, dim);
     expect(r.ok).toBe(false);
     if (!r.ok) {
       expect(r.code).toBe("bad-input");
       expect(r.message).toMatch(says);
     }
+  });
+
+  test("a non-positive molar mass is rejected", () => {
+    const r = parseQuantity("2 g/L", "concentration", { molarMass: 0 });
+    expect(r).toMatchObject({ ok: false, code: "bad-input" });
+  });
+
+  test("NaN and Infinity are rejected", () => {
+    expect(parseQuantity(NaN, "volume")).toMatchObject({ ok: false, code: "bad-input" });
+    expect(parseQuantity(Infinity, "concentration")).toMatchObject({ ok: false, code: "bad-input" });
   });
 });
