@@ -4,7 +4,8 @@
  * entry is copied under a new id and name in its own layer, without its lookup names.
  */
 import type { EntryKind, Library, SourceRecord, SubstanceRecord, SystemRecord, UserLayer } from "../library";
-import { makeId, sourceToInput, substanceToInput, systemToInput } from "./forms";
+import { makeId } from "./entry-id";
+import { sourceToInput, substanceToInput, systemToInput } from "./record-to-form";
 import type { SourceInput, SubstanceInput, SystemInput } from "./forms";
 
 export type EditKind = "system" | "substance" | "source";

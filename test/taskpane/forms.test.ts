@@ -1,19 +1,9 @@
 /** Editor fields ↔ library records: numbers, pKb conversion, provenance rules, ids, round trips. */
 import { BUILTIN_LIBRARY, validateLibraryDoc, LIBRARY_FORMAT } from "../../src/library";
-import {
-  buildSource,
-  buildSubstance,
-  buildSystem,
-  buildValue,
-  describePkbConversion,
-  emptySystem,
-  makeId,
-  readNumber,
-  sourceToInput,
-  substanceToInput,
-  systemToInput,
-  type FieldIssue,
-} from "../../src/taskpane/forms";
+import { emptySystem, readNumber, type FieldIssue } from "../../src/taskpane/forms";
+import { buildSource, buildSubstance, buildSystem, buildValue, describePkbConversion } from "../../src/taskpane/form-to-record";
+import { sourceToInput, substanceToInput, systemToInput } from "../../src/taskpane/record-to-form";
+import { makeId } from "../../src/taskpane/entry-id";
 
 describe("readNumber", () => {
   test.each([

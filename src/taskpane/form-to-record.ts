@@ -1,0 +1,158 @@
+/**
+ * The editor's fields → library records. Number fields are read here and reported at their field;
+ * everything else about a record is checked by the library's validator when the layer is saved.
+ * Pure: no DOM, no storage.
+ */
+import { pKbToPKa, PKW_25C } from "../library";
+import type { SourceRecord, StepRecord, SubstanceRecord, SystemRecord, ValueRecord } from "../library";
+import { readNumber, STATUS_LABEL } from "./forms";
+import type { Built, FieldIssue, SourceInput, SubstanceInput, SystemInput, ValueInput } from "./forms";
+
+const lines = (text: string): string[] =>
+  text
+    .split(/\r?\n/)
+    .map((s) => s.trim())
+    .filter((s) => s !== "");
+
+function setIf<T extends object, K extends keyof T>(target: T, key: K, value: T[K] | undefined | ""): void {
+  if (value !== undefined && value !== "") target[key] = value as T[K];
+}
+
+/** A value record from its fields; `optional` values with an empty number are left out. */
+export function buildValue(input: ValueInput, unit: string, path: string, issues: FieldIssue[], optional: boolean, override?: { value: number; note: string }): ValueRecord | undefined {
+  if (input.value.trim() === "" && optional) return undefined;
+  const n = override ? override.value : readNumber(input.value);
+  if (n === null) {
+    issues.push({ path: `${path}.value`, message: input.value.trim() === "" ? "a number is needed" : `'${input.value}' is not a number` });
+    return undefined;
+  }
+  const record: ValueRecord = { value: n, unit, conditions: input.conditions.trim(), status: input.status };
+  if (input.status === "published" && input.source.trim() === "") {
+    issues.push({ path: `${path}.source`, message: "a published value names its source: choose one (add it under 'Source' first), or mark the value 'common practice' or 'from memory, unverified'" });
+  }
+  if (input.status !== "published" && input.note.trim() === "" && !override) {
+    issues.push({ path: `${path}.note`, message: `a '${STATUS_LABEL[input.status]}' value says why in a note` });
+  }
+  setIf(record, "source", input.source.trim());
+  setIf(record, "locator", input.locator.trim());
+  const note = [input.note.trim(), override?.note ?? ""].filter((s) => s !== "").join("; ");
+  setIf(record, "note", note);
+  return record;
+}
+
+/** "pKa = pKw − pKb = 13.995 − 4.75 = 9.245", or null when the text is not a number. */
+export function describePkbConversion(pKbText: string): string | null {
+  const pKb = readNumber(pKbText);
+  if (pKb === null) return null;
+  const r = pKbToPKa(pKb);
+  if (!r.ok) return null;
+  return `pKa = pKw − pKb = ${PKW_25C.value} − ${pKb} = ${r.pKa} (pKw at 25 °C: CRC Handbook, after Marshall & Franck 1981)`;
+}
+
+export function buildSystem(input: SystemInput): Built<SystemRecord> {
+  const issues: FieldIssue[] = [];
+  const notes: string[] = [];
+  const topCharge = readNumber(input.topCharge);
+  if (topCharge === null || !Number.isInteger(topCharge)) issues.push({ path: "topCharge", message: "a whole number (charge of the fully protonated form, e.g. 0 for an acid HA, 1 for BH⁺)" });
+  if (input.steps.length === 0) issues.push({ path: "steps", message: "at least one step" });
+  const steps: StepRecord[] = input.steps.map((s, i) => {
+    const p = `steps[${i}]`;
+    let override: { value: number; note: string } | undefined;
+    if (s.enteredAsPkb) {
+      const pKb = readNumber(s.pKa.value);
+      if (pKb !== null) {
+        const r = pKbToPKa(pKb);
+        if (r.ok) {
+          override = { value: r.pKa, note: r.note };
+          notes.push(`step ${i + 1}: ${describePkbConversion(s.pKa.value)}`);
+        }
+      }
+    }
+    const pKa = buildValue(s.pKa, "1", `${p}.pKa`, issues, false, override);
+    const step: StepRecord = { pKa: pKa as ValueRecord };
+    const dH = buildValue(s.dH, "kJ/mol", `${p}.dH`, issues, true);
+    const dCp = buildValue(s.dCp, "J/(K·mol)", `${p}.dCp`, issues, true);
+    if (dH) step.dH = dH;
+    if (dCp) step.dCp = dCp;
+    return step;
+  });
+  if (issues.length) return { ok: false, issues };
+  const record: SystemRecord = { id: input.id, name: input.name.trim(), topCharge: topCharge as number, steps };
+  const species = lines(input.speciesNames);
+  if (species.length) record.speciesNames = species;
+  setIf(record, "note", input.note.trim());
+  return { ok: true, record, notes };
+}
+
+export function buildSubstance(input: SubstanceInput): Built<SubstanceRecord> {
+  const issues: FieldIssue[] = [];
+  const record: SubstanceRecord = { id: input.id, name: input.name.trim(), nature: input.nature };
+  const aliases = lines(input.aliases);
+  if (aliases.length) record.aliases = aliases;
+  setIf(record, "formula", input.formula.trim());
+  if (input.formula.trim() !== "" && !input.formulaAlias) record.formulaAlias = false;
+  if (input.formula.trim() === "" || input.molarMass.value.trim() !== "") {
+    const mm = buildValue(input.molarMass, "g/mol", "molarMass", issues, input.formula.trim() !== "");
+    if (input.formula.trim() === "" && input.molarMass.value.trim() === "") {
+      issues.splice(issues.length - 1, 1, { path: "molarMass.value", message: "give a formula (the molar mass is computed from it) or a molar mass" });
+    }
+    if (mm) record.molarMass = mm;
+  }
+  setIf(record, "state", input.state);
+  const count = (text: string, path: string, what: string, positive: boolean): number | undefined => {
+    const n = readNumber(text);
+    if (n === null || n < 0 || (positive && n === 0)) {
+      issues.push({ path, message: `${what}: ${positive ? "a number above 0" : "a number, 0 or more"}` });
+      return undefined;
+    }
+    return n;
+  };
+  const systems = input.systems.filter((s) => s.system !== "" || s.stoich.trim() !== "" && s.stoich.trim() !== "1");
+  if (systems.length) {
+    record.systems = systems.map((s, i) => {
+      if (s.system === "") issues.push({ path: `systems[${i}].system`, message: "choose an acid–base system" });
+      return {
+        system: s.system,
+        stoich: count(s.stoich, `systems[${i}].stoich`, "units per mole", true) ?? 1,
+        protons: count(s.protons, `systems[${i}].protons`, "dissociable protons carried", false) ?? 0,
+      };
+    });
+  }
+  const ions = input.ions.filter((s) => s.ion !== "");
+  if (ions.length) {
+    record.ions = ions.map((s, i) => ({ ion: s.ion, stoich: count(s.stoich, `ions[${i}].stoich`, "ions per mole", true) ?? 1 }));
+  }
+  for (const [key, label] of [
+    ["neutral", "neutral particles per mole"],
+    ["freeH", "H⁺ released outright per mole"],
+    ["freeOH", "OH⁻ released outright per mole"],
+  ] as const) {
+    if (input[key].trim() !== "") {
+      const n = count(input[key], key, label, false);
+      if (n !== undefined) record[key] = n;
+    }
+  }
+  setIf(record, "note", input.note.trim());
+  return issues.length ? { ok: false, issues } : { ok: true, record, notes: [] };
+}
+
+export function buildSource(input: SourceInput): Built<SourceRecord> {
+  const issues: FieldIssue[] = [];
+  const record: SourceRecord = { title: input.title.trim() };
+  setIf(record, "kind", input.kind);
+  setIf(record, "authors", input.authors.trim());
+  setIf(record, "container", input.container.trim());
+  setIf(record, "edition", input.edition.trim());
+  setIf(record, "volume", input.volume.trim());
+  setIf(record, "pages", input.pages.trim());
+  if (input.year.trim() !== "") {
+    const y = readNumber(input.year);
+    if (y === null || !Number.isInteger(y)) issues.push({ path: "year", message: "a year such as 2019" });
+    else record.year = y;
+  }
+  setIf(record, "doi", input.doi.trim());
+  setIf(record, "url", input.url.trim());
+  setIf(record, "locators", input.locators.trim());
+  setIf(record, "note", input.note.trim());
+  return issues.length ? { ok: false, issues } : { ok: true, record, notes: [] };
+}
