@@ -5,6 +5,7 @@
  */
 import type { EntryKind, Library, SourceRecord, SubstanceRecord, SystemRecord, UserLayer } from "../library";
 import { makeId } from "./entry-id";
+import { clone } from "./layer-docs";
 import { sourceToInput, substanceToInput, systemToInput } from "./record-to-form";
 import type { SourceInput, SubstanceInput, SystemInput } from "./forms";
 
@@ -14,10 +15,6 @@ export type EditDraft =
   | { kind: "system"; layer: UserLayer; originalId: string | null; input: SystemInput; overrides: boolean }
   | { kind: "substance"; layer: UserLayer; originalId: string | null; input: SubstanceInput; overrides: boolean }
   | { kind: "source"; layer: UserLayer; originalId: string | null; input: SourceInput; overrides: boolean };
-
-function clone<T>(v: T): T {
-  return JSON.parse(JSON.stringify(v)) as T;
-}
 
 /** A draft for editing an existing user entry. */
 export function editDraft(library: Library, kind: EditKind, id: string): EditDraft | null {

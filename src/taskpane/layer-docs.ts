@@ -15,6 +15,7 @@ export function isEmpty(doc: LibraryDoc): boolean {
   return !Object.keys(doc.sources ?? {}).length && !Object.keys(doc.atomicWeights ?? {}).length && !doc.systems?.length && !doc.ions?.length && !doc.substances?.length;
 }
 
+/** A deep copy of plain JSON data (library records and layer files are JSON). */
 export function clone<T>(v: T): T {
   return JSON.parse(JSON.stringify(v)) as T;
 }

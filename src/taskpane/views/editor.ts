@@ -94,7 +94,7 @@ export class EditorView {
     const body = d.kind === "system" ? systemFields(ctx, d.input) : d.kind === "substance" ? substanceFields(ctx, d.input) : sourceFields(ctx, d.input);
     const save = el("button", { type: "submit", class: "primary", id: "editor-save" }, editing ? "Save changes" : "Save");
     const cancel = button(editing ? "Cancel editing" : "Clear", () => {
-      this.draft = this.fresh(editing ? d.kind : d.kind);
+      this.draft = this.fresh(d.kind);
       this.render();
     });
     replaceChildren(this.form, ...body, el("div", { class: "actions" }, save, cancel));
