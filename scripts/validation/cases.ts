@@ -458,6 +458,26 @@ IDENTITY_CASES.push(
   },
 );
 
+IDENTITY_CASES.push({
+  id: "ID-UNITS-SALINE",
+  group: "9. Identities (results fed back through AQ.PH)",
+  source:
+    "definition of unit text: 0.9 % w/v is 0.9 g per 100 mL (common practice), 9 g/L, so it must give the same osmolarity as 9 g/L divided by the library's molar mass of NaCl (CIAAW atomic weights)",
+  conditions: "normal saline, NaCl 0.9 % w/v, 25 °C; the difference of the two cells",
+  sheet: {
+    rows: [
+      ['=AQ.OSMOLARITY("NaCl","0.9 % w/v")'],
+      ['=AQ.OSMOLARITY("NaCl",9/AQ.MOLARMASS("NaCl"))'],
+      ["=A1-A2"],
+    ],
+    cell: "A3",
+  },
+  expected: 0,
+  status: "identity",
+  unit: "osmol/L",
+  tolerance: { value: 1e-12, reason: "the same number reached by two routes: a difference of rounding only" },
+});
+
 export const CASES: ValidationCase[] = [
   ...STANDARDS_25,
   ...STANDARDS_T,
