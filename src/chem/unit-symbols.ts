@@ -141,6 +141,7 @@ export function readUnit(unit: string): UnitRead {
 
 /** A case hint for symbols that differ from a known one only in case ("mm" → "mM"). */
 function suggestion(symbol: string): string {
+  if (symbol === "C" || symbol === "F") return ` (a temperature is written "°${symbol}" or "deg${symbol}")`;
   const lower = symbol.toLowerCase();
   for (const p of ["", ...Object.keys(PREFIX)]) {
     for (const b of Object.keys(PREFIXABLE)) {

@@ -52,6 +52,9 @@ function convert(x: number, d: Dims, unit: string, dim: QuantityDimension, text:
   if (dim === "concentration") {
     if (same(d, 1, 0, -1)) return { ok: true, value: x * d.factor };
     if (same(d, 0, 1, -1)) return perMole("mass concentration");
+    if (same(d, 1, -1, 0)) {
+      return fail("bad-input", `"${text}" is a molality (per kilogram of solvent): the functions take mol/L of solution; convert with the solution's density.`);
+    }
   } else if (dim === "volume") {
     if (same(d, 0, 0, 1)) return { ok: true, value: x * d.factor };
   } else if (dim === "amount") {
