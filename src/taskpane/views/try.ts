@@ -31,7 +31,7 @@ export class TryView {
     const form = el(
       "form",
       { novalidate: true, "aria-label": "Try a mixture" },
-      el("p", { class: "hint" }, "Concentrations in the final solution: mol/L, or with a unit (25 mM, 2.1 g/L). Any name or alias in the library in effect."),
+      el("p", { class: "hint" }, "Concentrations in the final solution: mol/L, or with a unit (25 mM, 2.1 g/L, 0.9 % w/v). Any name or alias in the library in effect."),
       el("table", { class: "try" }, el("thead", {}, el("tr", {}, el("th", { scope: "col" }, "Substance"), el("th", { scope: "col" }, "Amount"), el("th", {}, el("span", { class: "visually-hidden" }, "Remove")))), this.table),
       el("div", { class: "actions" }, button("Add a row", () => {
         this.rows.push({ name: "", amount: "" });
