@@ -14,11 +14,11 @@
 import * as fs from "fs";
 import * as path from "path";
 import type { Locator, Page } from "playwright-core";
-import { launch, routeOffice, snapshotDist, ROOT, type Launched } from "./support/browser";
-import { drainProblems, open, waitForText, watch, type PageWatch } from "./support/page-watch";
+import { routeOffice, ROOT } from "./support/browser";
+import { waitForText } from "./support/page-watch";
 import type { WorkbookModel } from "./support/fake-excel-workbook";
 import { routeFakeOffice } from "./support/fake-office";
-import { serveDirectory, type StaticServer } from "./support/static-server";
+import { NO_PROBLEMS, startPane, type PaneSession } from "./support/pane-session";
 
 jest.setTimeout(120000);
 
@@ -79,33 +79,21 @@ async function fillTry(page: Page, rows: [string, string][], temperature = "25")
 }
 
 describe("Picture view in Chromium at the pane's width", () => {
-  let server: StaticServer;
-  let dist: ReturnType<typeof snapshotDist>;
-  let browser: Launched;
+  let session: PaneSession;
   let page: Page;
-  let w: PageWatch;
 
   beforeAll(async () => {
-    dist = snapshotDist();
     fs.mkdirSync(ARTIFACTS, { recursive: true });
-    server = await serveDirectory(dist.dir);
-    browser = await launch({ deviceScaleFactor: 2 });
-    const requests: string[] = [];
-    await routeOffice(browser.context, "npm", requests);
-    page = browser.context.pages()[0] ?? (await browser.context.newPage());
-    await page.setViewportSize({ width: PANE_WIDTH, height: 900 });
-    w = await watch(page, requests);
-    await open(page, server.url);
+    session = await startPane({ route: (context, requests) => routeOffice(context, "npm", requests), width: PANE_WIDTH, deviceScaleFactor: 2 });
+    page = session.page;
   });
 
   afterAll(async () => {
-    await browser?.close();
-    await server?.close();
-    dist?.remove();
+    await session?.close();
   });
 
   afterEach(async () => {
-    expect(await drainProblems(page, w)).toEqual({ injected: [], csp: [], consoleCsp: [], errors: [] });
+    expect(await session.problems()).toEqual(NO_PROBLEMS);
   });
 
   test("with no mixture yet, the view says where one comes from", async () => {
@@ -279,11 +267,8 @@ const WORKBOOK: WorkbookModel = {
 };
 
 describe("Picture view inside Excel (a stand-in office.js over the hand mock of Excel)", () => {
-  let server: StaticServer;
-  let dist: ReturnType<typeof snapshotDist>;
-  let browser: Launched;
+  let session: PaneSession;
   let page: Page;
-  let w: PageWatch;
 
   const fakeExcel = <T>(fn: string, ...args: unknown[]): Promise<T> =>
     page.evaluate(([f, a]) => {
@@ -293,25 +278,16 @@ describe("Picture view inside Excel (a stand-in office.js over the hand mock of 
   const reads = () => page.evaluate(() => (window as unknown as { __fakeExcel: { activeCellReads: number } }).__fakeExcel.activeCellReads);
 
   beforeAll(async () => {
-    dist = snapshotDist();
-    server = await serveDirectory(dist.dir);
-    browser = await launch({ deviceScaleFactor: 2 });
-    const requests: string[] = [];
-    await routeFakeOffice(browser.context, WORKBOOK, requests);
-    page = browser.context.pages()[0] ?? (await browser.context.newPage());
-    await page.setViewportSize({ width: PANE_WIDTH, height: 900 });
-    w = await watch(page, requests);
-    await open(page, server.url);
+    session = await startPane({ route: (context, requests) => routeFakeOffice(context, WORKBOOK, requests), width: PANE_WIDTH, deviceScaleFactor: 2 });
+    page = session.page;
   });
 
   afterAll(async () => {
-    await browser?.close();
-    await server?.close();
-    dist?.remove();
+    await session?.close();
   });
 
   afterEach(async () => {
-    expect(await drainProblems(page, w)).toEqual({ injected: [], csp: [], consoleCsp: [], errors: [] });
+    expect(await session.problems()).toEqual(NO_PROBLEMS);
   });
 
   test("the pane knows it is in Excel, and follows nothing until the Picture tab opens", async () => {

@@ -11,9 +11,9 @@
 import * as fs from "fs";
 import * as path from "path";
 import type { Locator, Page } from "playwright-core";
-import { launch, routeOffice, snapshotDist, ROOT, type Launched } from "./support/browser";
-import { open, waitForText, watch, type PageWatch } from "./support/page-watch";
-import { serveDirectory, type StaticServer } from "./support/static-server";
+import { routeOffice, ROOT } from "./support/browser";
+import { waitForText, type PageWatch } from "./support/page-watch";
+import { NO_PROBLEMS, startPane, type PaneSession } from "./support/pane-session";
 
 jest.setTimeout(120000);
 
@@ -66,9 +66,7 @@ const XSS_IMG = '<img src=x onerror="window.__injected.push(\'img\')">';
 const XSS_SCRIPT = "<script>window.__injected.push('script')</script>";
 
 describe("task pane in Chromium with office.js from the npm copy", () => {
-  let server: StaticServer;
-  let dist: ReturnType<typeof snapshotDist>;
-  let browser: Launched;
+  let session: PaneSession;
   let page: Page;
   let w: PageWatch;
   let phFirst = 0;
@@ -76,34 +74,18 @@ describe("task pane in Chromium with office.js from the npm copy", () => {
   let exported = "";
 
   beforeAll(async () => {
-    dist = snapshotDist();
     fs.mkdirSync(ARTIFACTS, { recursive: true });
-    server = await serveDirectory(dist.dir);
-    browser = await launch();
-    const requests: string[] = [];
-    await routeOffice(browser.context, "npm", requests);
-    page = browser.context.pages()[0] ?? (await browser.context.newPage());
-    await page.setViewportSize({ width: 380, height: 900 });
-    w = await watch(page, requests);
-    await open(page, server.url);
+    session = await startPane({ route: (context, requests) => routeOffice(context, "npm", requests), width: 380 });
+    ({ page, w } = session);
   });
 
   afterAll(async () => {
-    await browser?.close();
-    await server?.close();
-    dist?.remove();
+    await session?.close();
   });
 
   afterEach(async () => {
     // nothing injected ever ran, nothing broke the policy, no script errors (reported once, then cleared)
-    const seen = await page.evaluate(() => {
-      const g = window as unknown as { __injected: string[]; __csp: string[] };
-      const out = { injected: [...g.__injected], csp: [...g.__csp] };
-      g.__csp.length = 0;
-      return out;
-    });
-    const found = { ...seen, consoleCsp: w.csp.splice(0), errors: w.errors.splice(0) };
-    expect(found).toEqual({ injected: [], csp: [], consoleCsp: [], errors: [] });
+    expect(await session.problems()).toEqual(NO_PROBLEMS);
   });
 
   test("opens outside Office with the fingerprint, version and where the layers live", async () => {
@@ -252,7 +234,7 @@ describe("task pane in Chromium with office.js from the npm copy", () => {
     const invalid = JSON.stringify({ format: "protolyte-library", schemaVersion: 1, name: "x", systems: [{ id: "q", name: "q", topCharge: 0, steps: [{ pKa: { value: 99, unit: "1", conditions: "25 °C", status: "published", source: "goldberg2002" } }] }] });
     await chooseFile(page, "invalid.json", invalid);
     await waitForText(page.locator("#import-outcome"), /systems\[0\]\.steps\[0\]\.pKa\.value/);
-    const huge = path.join(browser.profile, "huge.json");
+    const huge = path.join(session.browser.profile, "huge.json");
     fs.writeFileSync(huge, Buffer.alloc(5 * 1024 * 1024 + 10, 32));
     await chooseFile(page, "huge.json", { path: huge });
     await waitForText(page.locator("#import-outcome"), /'huge\.json' was not imported: it is 5\.0 MB; library files are limited to 5\.0 MB/);
@@ -343,15 +325,10 @@ describe("task pane in Chromium with office.js from the npm copy", () => {
 
 describe("task pane when office.js cannot load at all", () => {
   test("works offline against browser storage", async () => {
-    const dist = snapshotDist();
-    const server = await serveDirectory(dist.dir);
-    const browser = await launch();
+    const session = await startPane({ route: (context, requests) => routeOffice(context, "fail", requests) });
+    const { page, w } = session;
+    const requests = w.requests;
     try {
-      const requests: string[] = [];
-      await routeOffice(browser.context, "fail", requests);
-      const page = browser.context.pages()[0] ?? (await browser.context.newPage());
-      const w = await watch(page, requests);
-      await open(page, server.url);
       expect(requests.some((u) => u.endsWith("/office.js"))).toBe(true);
       await waitForText(page.locator("#where"), /The Office library \(office\.js\) did not load/);
       await waitForText(page.locator("#fingerprint"), /^PL-/);
@@ -370,9 +347,7 @@ describe("task pane when office.js cannot load at all", () => {
       expect(w.errors).toEqual([]);
       expect(w.csp).toEqual([]);
     } finally {
-      await browser.close();
-      await server.close();
-      dist.remove();
+      await session.close();
     }
   });
 });

@@ -1,0 +1,53 @@
+/**
+ * One task pane in headless Chromium, as every browser test starts it: a snapshot of the production
+ * build served on 127.0.0.1, a fresh browser, office.js routed as the test asks, the page watched for
+ * errors and policy violations, the pane opened and started.
+ */
+import type { BrowserContext, Page } from "playwright-core";
+import { launch, snapshotDist, type Launched } from "./browser";
+import { drainProblems, open, watch, type PageWatch } from "./page-watch";
+import { serveDirectory, type StaticServer } from "./static-server";
+
+export interface PaneSession {
+  page: Page;
+  w: PageWatch;
+  browser: Launched;
+  server: StaticServer;
+  /** Closes the browser and the server and removes the snapshot. */
+  close(): Promise<void>;
+  /** What went wrong since the last call: injected scripts, CSP violations, errors (then cleared). */
+  problems(): ReturnType<typeof drainProblems>;
+}
+
+export interface PaneOptions {
+  /** Routes office.js (and refuses everything else) for the context, recording requests. */
+  route(context: BrowserContext, requests: string[]): Promise<void>;
+  /** Viewport width in CSS pixels; the height is 900. */
+  width?: number;
+  deviceScaleFactor?: number;
+}
+
+export const NO_PROBLEMS = { injected: [], csp: [], consoleCsp: [], errors: [] };
+
+export async function startPane(opts: PaneOptions): Promise<PaneSession> {
+  const dist = snapshotDist();
+  const server = await serveDirectory(dist.dir);
+  const browser = await launch(opts.deviceScaleFactor === undefined ? {} : { deviceScaleFactor: opts.deviceScaleFactor });
+  const close = async (): Promise<void> => {
+    await browser.close();
+    await server.close();
+    dist.remove();
+  };
+  try {
+    const requests: string[] = [];
+    await opts.route(browser.context, requests);
+    const page = browser.context.pages()[0] ?? (await browser.context.newPage());
+    if (opts.width !== undefined) await page.setViewportSize({ width: opts.width, height: 900 });
+    const w = await watch(page, requests);
+    await open(page, server.url);
+    return { page, w, browser, server, close, problems: () => drainProblems(page, w) };
+  } catch (e) {
+    await close();
+    throw e;
+  }
+}
