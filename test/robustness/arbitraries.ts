@@ -328,3 +328,36 @@ export function cellFor(param: string): fc.Arbitrary<unknown> {
       return anyCell;
   }
 }
+
+/**
+ * Arguments for one catalogue entry: names/amounts together (and acid/base forms together), every
+ * other parameter from its generator. "hostile" draws anything a cell can hold, "plausible" sensible
+ * values everywhere, so the solvers behind every function are reached too. With `blankOptionals`, a
+ * hostile optional argument is sometimes omitted (null or undefined, as Excel passes it).
+ */
+export function argsFor(
+  params: readonly { name: string; optional: boolean }[],
+  mode: "hostile" | "plausible",
+  opts: { blankOptionals?: boolean } = {},
+): fc.Arbitrary<unknown[]> {
+  const parts: fc.Arbitrary<unknown[]>[] = [];
+  const hostile = mode === "hostile";
+  for (let i = 0; i < params.length; i++) {
+    const p = params[i];
+    const next = params[i + 1]?.name;
+    if (p.name === "names" && next === "amounts") {
+      parts.push(hostile ? mixtureArgs : plausibleMixtureArgs);
+      i++;
+    } else if (p.name === "acid_form" && next === "base_form") {
+      parts.push(hostile ? recipePairArgs : plausibleRecipePairArgs);
+      i++;
+    } else if (!hostile) {
+      parts.push(plausibleFor(p.name).map((v) => [v]));
+    } else {
+      const cell = cellFor(p.name);
+      const blankable = opts.blankOptionals && p.optional;
+      parts.push((blankable ? fc.oneof({ weight: 3, arbitrary: cell }, { weight: 1, arbitrary: fc.constantFrom(null, undefined) }) : cell).map((v) => [v]));
+    }
+  }
+  return fc.tuple(...parts).map((chunks) => chunks.flat());
+}

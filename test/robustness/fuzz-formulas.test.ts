@@ -11,7 +11,7 @@ import type { RawCellContent } from "hyperformula";
 import { columnName, evaluateFormula, evaluateSheets, type CellResult } from "../../src/cli/evaluate";
 import { CATALOGUE, type CatalogueEntry } from "../../src/functions/catalogue";
 import { resetActiveLibrary } from "../../src/library";
-import { cellFor, mixtureArgs, plausibleFor, plausibleMixtureArgs, plausibleRecipePairArgs, recipePairArgs, runs, SEED } from "./arbitraries";
+import { argsFor as entryArgs, runs, SEED } from "./arbitraries";
 import { show } from "./outcome";
 
 beforeAll(() => resetActiveLibrary());
@@ -52,21 +52,7 @@ function formulaOf(entry: CatalogueEntry, args: unknown[]): string {
 }
 
 function argsFor(entry: CatalogueEntry, hostile: boolean): fc.Arbitrary<unknown[]> {
-  const parts: fc.Arbitrary<unknown[]>[] = [];
-  for (let i = 0; i < entry.params.length; i++) {
-    const p = entry.params[i];
-    const next = entry.params[i + 1]?.name;
-    if (p.name === "names" && next === "amounts") {
-      parts.push(hostile ? mixtureArgs : plausibleMixtureArgs);
-      i++;
-    } else if (p.name === "acid_form" && next === "base_form") {
-      parts.push(hostile ? recipePairArgs : plausibleRecipePairArgs);
-      i++;
-    } else {
-      parts.push((hostile ? cellFor(p.name) : plausibleFor(p.name)).map((v) => [v]));
-    }
-  }
-  return fc.tuple(...parts).map((chunks) => chunks.flat());
+  return entryArgs(entry.params, hostile ? "hostile" : "plausible");
 }
 
 const anyArgs = (entry: CatalogueEntry) => fc.oneof(argsFor(entry, true), argsFor(entry, false));

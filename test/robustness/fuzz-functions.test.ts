@@ -11,7 +11,7 @@ import fc from "fast-check";
 import { CATALOGUE, type CatalogueEntry } from "../../src/functions/catalogue";
 import { clearMixtureCache } from "../../src/functions/mixture";
 import { resetActiveLibrary } from "../../src/library";
-import { cellFor, largeMixtureArgs, mixtureArgs, plausibleFor, plausibleMixtureArgs, plausibleRecipePairArgs, recipePairArgs, runs, SEED } from "./arbitraries";
+import { argsFor as entryArgs, cellFor, largeMixtureArgs, runs, SEED } from "./arbitraries";
 import { outcomeOf, outcomeProblem, show, type Outcome } from "./outcome";
 
 beforeAll(() => {
@@ -19,31 +19,9 @@ beforeAll(() => {
   clearMixtureCache();
 });
 
-/**
- * Arguments for one entry: names/amounts together (and acid/base forms together), every other
- * parameter from its generator; optionals sometimes omitted. Half the cases are hostile anywhere,
- * half are sensible everywhere, so the solvers behind every function are reached too.
- */
+/** Arguments for one entry; hostile optionals are sometimes omitted, as Excel passes them. */
 function argsFor(entry: CatalogueEntry, mode: "hostile" | "plausible"): fc.Arbitrary<unknown[]> {
-  const parts: fc.Arbitrary<unknown[]>[] = [];
-  const hostile = mode === "hostile";
-  for (let i = 0; i < entry.params.length; i++) {
-    const p = entry.params[i];
-    const next = entry.params[i + 1]?.name;
-    if (p.name === "names" && next === "amounts") {
-      parts.push(hostile ? mixtureArgs : plausibleMixtureArgs);
-      i++;
-    } else if (p.name === "acid_form" && next === "base_form") {
-      parts.push(hostile ? recipePairArgs : plausibleRecipePairArgs);
-      i++;
-    } else if (!hostile) {
-      parts.push(plausibleFor(p.name).map((v) => [v]));
-    } else {
-      const cell = cellFor(p.name);
-      parts.push((p.optional ? fc.oneof({ weight: 3, arbitrary: cell }, { weight: 1, arbitrary: fc.constantFrom(null, undefined) }) : cell).map((v) => [v]));
-    }
-  }
-  return fc.tuple(...parts).map((chunks) => chunks.flat());
+  return entryArgs(entry.params, mode, { blankOptionals: true });
 }
 
 function sameOutcome(a: Outcome, b: Outcome): boolean {
