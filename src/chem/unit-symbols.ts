@@ -59,11 +59,15 @@ const SUPERSCRIPT: Readonly<Record<string, string>> = {
   "\u00b3": "3",
 };
 
+/** The prefixes as a list, made once: unit text is read for every row of a table that uses it. */
+const PREFIX_LIST: readonly (readonly [string, number])[] = Object.entries(PREFIX);
+const SUPERSCRIPTS = new RegExp(`[${Object.keys(SUPERSCRIPT).join("")}]`, "g");
+
 /** The dimensions of one symbol with its exponent, or null if the symbol is not a known unit. */
 function symbolDims(symbol: string): Dims | null {
   const direct = PREFIXABLE[symbol];
   if (direct) return direct;
-  for (const [p, f] of Object.entries(PREFIX)) {
+  for (const [p, f] of PREFIX_LIST) {
     if (symbol.length > p.length && symbol.startsWith(p)) {
       const base = PREFIXABLE[symbol.slice(p.length)];
       if (base) return { ...base, factor: base.factor * f };
@@ -91,8 +95,7 @@ const FACTOR = /^([A-Za-z\u00b5\u03bc]+)(?:\^?([+-]?\d+))?$/;
 
 /** Reads a compound unit ("mmol/L", "mol L-1", "mg/mL") into its dimensions. */
 export function readUnit(unit: string): UnitRead {
-  let text = unit;
-  for (const [sup, plain] of Object.entries(SUPERSCRIPT)) text = text.split(sup).join(plain);
+  const text = unit.replace(SUPERSCRIPTS, (c) => SUPERSCRIPT[c]);
   // Split into factors, remembering which follow a "/".
   const pieces = text
     .replace(/\s*\/\s*/g, " / ")
