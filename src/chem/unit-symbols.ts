@@ -28,7 +28,7 @@ const PREFIX: Readonly<Record<string, number>> = {
   f: 1e-15,
 };
 
-/** Long prefixes for spelled-out litres ("millilitre"). */
+/** Long prefixes for spelled-out litres ("millilitre"): the SI prefix names (SI Brochure, Table 7). */
 const LONG_PREFIX: Readonly<Record<string, number>> = { "": 1, kilo: 1e3, deci: 1e-1, centi: 1e-2, milli: 1e-3, micro: 1e-6, nano: 1e-9 };
 
 /** Base symbols that take SI prefixes, with their dimensions. */
@@ -37,13 +37,19 @@ const PREFIXABLE: Readonly<Record<string, Dims>> = {
   g: { amount: 0, mass: 1, volume: 0, factor: 1 },
   L: { amount: 0, mass: 0, volume: 1, factor: 1 },
   l: { amount: 0, mass: 0, volume: 1, factor: 1 },
-  M: { amount: 1, mass: 0, volume: -1, factor: 1 }, // molar: 1 mol/L (common practice; IUPAC Green Book 3rd ed. §2.10)
+  M: { amount: 1, mass: 0, volume: -1, factor: 1 }, // molar: 1 mol/L (common practice; not an SI symbol)
 };
 
-/** Lengths, only as cubes (m³, dm³, cm³, mm³): 1 m³ = 1000 L, so 1 m = 10 L^(1/3). */
+/**
+ * Lengths, only as cubes (m³, dm³, cm³, mm³): 1 L = 1 dm³ (SI Brochure, 9th edition 2019, Table 8),
+ * so 1 m³ = 1000 L.
+ */
 const LENGTH_PREFIX: Readonly<Record<string, number>> = { "": 1, d: 1e-1, c: 1e-2, m: 1e-3 };
 
-/** Temperature units and their conversion to °C (0 °C = 273.15 K; °F by its definition). Only as the whole unit. */
+/**
+ * Temperature units and their conversion to °C: t/°C = T/K − 273.15 (SI Brochure, 9th edition 2019,
+ * §2.3.1); t/°F = 9/5·t/°C + 32 (definition of the Fahrenheit scale). Only as the whole unit.
+ */
 export const TEMPERATURE: Readonly<Record<string, { toCelsius: (x: number) => number }>> = {
   K: { toCelsius: (x) => x - 273.15 },
   degC: { toCelsius: (x) => x },
@@ -75,7 +81,7 @@ function symbolDims(symbol: string): Dims | null {
   }
   const litre = /^(kilo|deci|centi|milli|micro|nano)?(?:liter|litre)s?$/.exec(symbol);
   if (litre) return { amount: 0, mass: 0, volume: 1, factor: LONG_PREFIX[litre[1] ?? ""] };
-  if (symbol === "cc") return { amount: 0, mass: 0, volume: 1, factor: 1e-3 };
+  if (symbol === "cc") return { amount: 0, mass: 0, volume: 1, factor: 1e-3 }; // cubic centimetre (common practice)
   return null;
 }
 
