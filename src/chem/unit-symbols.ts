@@ -48,7 +48,7 @@ const LENGTH_PREFIX: Readonly<Record<string, number>> = { "": 1, d: 1e-1, c: 1e-
 
 /**
  * Temperature units and their conversion to °C: t/°C = T/K − 273.15 (SI Brochure, 9th edition 2019,
- * §2.3.1); t/°F = 9/5·t/°C + 32 (definition of the Fahrenheit scale). Only as the whole unit.
+ * definition of the Celsius temperature); t/°F = 9/5·t/°C + 32 (definition of the Fahrenheit scale). Only as the whole unit.
  */
 export const TEMPERATURE: Readonly<Record<string, { toCelsius: (x: number) => number }>> = {
   K: { toCelsius: (x) => x - 273.15 },
