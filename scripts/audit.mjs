@@ -1,15 +1,20 @@
 #!/usr/bin/env node
 /**
  * Supply-chain check of what ships: `npm audit --omit=dev --json`, failing on high or critical
- * advisories. It needs the npm registry's advisory endpoint; when that cannot be reached the script
- * says so and fails (exit 2) rather than pass without having checked anything.
+ * advisories. It needs the npm registry's advisory endpoint; when that cannot be used the script
+ * says so and exits 2 rather than pass without having checked anything.
  *
- *   node scripts/audit.mjs        exit 0: no high/critical advisories; 1: some (listed); 2: could not check
+ *   npm run audit                 exit 0: no high/critical advisories; 1: some (listed); 2: could not check
+ *
+ * The first line of the output is the verdict: "AUDIT OK: …", "AUDIT FAILED: …" or
+ * "AUDIT NOT RUN: <why>". Addresses in npm's answer are left out of the message (they name the
+ * registry this machine is configured with; the reason is enough).
  *
  * PROTOLYTE_AUDIT_REPORT=<file> reads a saved `npm audit --json` answer instead of calling npm (the
  * test checks the script's verdicts on such files without the network).
  *
- * Run by test/robustness/supply-chain.test.ts (CI has the registry).
+ * test/robustness/supply-chain.test.ts runs it: advisories fail the test; an audit that could not
+ * run is reported as a skipped test whose title gives the reason.
  */
 import { spawnSync } from "node:child_process";
 import { readFileSync } from "node:fs";
@@ -19,11 +24,14 @@ import { fileURLToPath } from "node:url";
 const root = join(dirname(fileURLToPath(import.meta.url)), "..");
 const BLOCKING = ["high", "critical"];
 
+/** npm's answer without the addresses in it (they would name this machine's registry host). */
+const withoutAddresses = (text) => String(text).replace(/\b[a-z][a-z0-9+.-]*:\/\/\S+/gi, "(the advisory endpoint)");
+
 function cannotCheck(detail) {
   console.log(
-    `AUDIT NOT RUN: the npm advisory endpoint could not be used, so the production dependencies were not checked.\n` +
-      `  npm said: ${detail}\n` +
-      `  Run this where the npm registry (https://registry.npmjs.org, POST /-/npm/v1/security/advisories/bulk) is reachable, as CI is.`,
+    `AUDIT NOT RUN: ${withoutAddresses(detail)}\n` +
+      `  The npm registry's advisory endpoint could not be used, so the production dependencies were not checked.\n` +
+      `  Run \`npm run audit\` where that endpoint answers.`,
   );
   process.exit(2);
 }
