@@ -35,7 +35,7 @@ export const CATALOGUE: readonly CatalogueEntry[] = [
   {
     id: "RECIPE",
     fn: AQ.RECIPE,
-    params: [req("acid_form"), req("base_form"), req("target_pH"), req("total_conc"), req("volume"), opt("temperature"), opt("ionic_strength"), opt("salt"), opt("activity")],
+    params: [req("acid_form"), req("base_form"), req("target_pH"), req("total_conc"), req("volume"), opt("temperature"), opt("ionic_strength"), opt("salt"), opt("activity"), opt("other_names"), opt("other_amounts")],
     result: "matrix",
   },
   {

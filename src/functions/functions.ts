@@ -191,7 +191,9 @@ export function MOLARMASS(substance: string): number {
  * @param [ionic_strength] Target ionic strength, mol/L, made up with the salt. Default: no salt added.
  * @param [salt] Salt for the ionic strength. Default "NaCl".
  * @param [activity] Activity model: "davies" (default), "ideal" or "debye-huckel".
- * @returns A table with a header row: component, mol, grams (solids) or litres (liquid stocks).
+ * @param [other_names] Other components of the batch held at fixed amounts (salts, sugars, surfactants, a second buffer), one per cell.
+ * @param [other_amounts] Concentration of each other component in the batch, mol/L or unit text; same shape as other_names.
+ * @returns A table with a header row: component, mol, grams (solids) or litres (liquid stocks); the other components follow the buffer.
  */
 export function RECIPE(
   acid_form: string,
@@ -203,8 +205,10 @@ export function RECIPE(
   ionic_strength?: any,
   salt?: string,
   activity?: string,
+  other_names?: any[][],
+  other_amounts?: any[][],
 ): any[][] {
-  return guard(() => recipe(acid_form, base_form, target_pH, total_conc, volume, temperature, ionic_strength, salt, activity));
+  return guard(() => recipe(acid_form, base_form, target_pH, total_conc, volume, temperature, ionic_strength, salt, activity, other_names, other_amounts));
 }
 
 /**

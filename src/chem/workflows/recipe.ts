@@ -13,6 +13,10 @@
  * until I(s_hi) ≥ I* (capped at the most the engine accepts: "unreachable" beyond); Brent's method
  * then refines s to |I − I*| ≤ 1e-12·I*.
  *
+ * Background: other components of the batch (salts, arginine, sucrose, polysorbate, a second buffer)
+ * at fixed concentrations, present in every solve, so they count in the ionic strength and the pH.
+ * A background component that carries the buffer's own system is refused (it belongs in C).
+ *
  * Output per component: mol for the batch (mol/L × V); grams = molar mass × mol when the molar mass
  * is known and no stock is named; litres of stock = mol / stock concentration when a stock
  * concentration is given for the component (liquids such as hydrochloric acid).
@@ -40,12 +44,14 @@ export interface RecipeRequest {
   ionicStrength?: number;
   /** The salt for the ionic strength (the caller resolves the default, NaCl). */
   salt?: Component;
+  /** Other components of the batch at fixed concentrations (mol/L), held while the recipe is solved. */
+  background?: Mixture;
   /** Stock concentrations, mol/L, by component id: those components are given in litres of stock. */
   stocks?: Record<string, number>;
 }
 
 export interface RecipeLine {
-  role: "acid form" | "base form" | "titrant" | "salt";
+  role: "acid form" | "base form" | "titrant" | "salt" | "background";
   name: string;
   component: Component;
   /** mol/L in the batch. */
@@ -92,24 +98,48 @@ function checkRequest(req: RecipeRequest): ReturnType<typeof fail> | null {
     }
     if (!salt.ions.some((i) => i.stoich > 0 && i.ion.charge !== 0)) return fail("bad-input", `The salt "${salt.name}" releases no ions: it cannot raise the ionic strength.`);
   }
+  for (const e of req.background ?? []) {
+    const badE = checkComponent(e?.component, "background component");
+    if (badE) return badE;
+    if (typeof e.conc !== "number" || !Number.isFinite(e.conc) || e.conc < 0) return fail("bad-input", `The amount of "${e.component.name}" must be a number ≥ 0 mol/L, got ${String(e.conc)}.`);
+  }
   for (const [id, c] of Object.entries(req.stocks ?? {})) {
     if (typeof c !== "number" || !Number.isFinite(c) || c <= 0) return fail("bad-input", `The stock concentration of "${id}" must be a number > 0 mol/L, got ${String(c)}.`);
   }
   return null;
 }
 
-type Batch = Result<{ entries: Mixture; pH: number; ionicStrength: number; warnings: string[] }>;
+type Batch = Result<{ entries: Mixture; roles: RecipeLine["role"][]; pH: number; ionicStrength: number; warnings: string[] }>;
+
+/** The buffer's system id: a background component carrying it is refused. */
+function bufferSystem(plan: BufferPlan): string {
+  const c = plan.mode === "pair" ? plan.acid : plan.form;
+  return c.systems.find((s) => s.stoich > 0)?.system.id ?? "";
+}
+
+function checkBackground(plan: BufferPlan, background: Mixture): ReturnType<typeof fail> | null {
+  const id = bufferSystem(plan);
+  for (const e of background) {
+    if (e.conc > 0 && e.component.systems.some((s) => s.stoich > 0 && s.system.id === id)) {
+      return fail("bad-input", `"${e.component.name}" among the other components carries the buffer's own system (${id}): count it in the total concentration instead.`);
+    }
+  }
+  return null;
+}
 
 function batchAt(plan: BufferPlan, req: RecipeRequest, salt: number, chem: ChemOptions): Batch {
-  const background: Mixture = req.salt !== undefined && req.ionicStrength !== undefined ? [{ component: req.salt, conc: salt }] : [];
+  const saltEntry: Mixture = req.salt !== undefined && req.ionicStrength !== undefined ? [{ component: req.salt, conc: salt }] : [];
+  const others = req.background ?? [];
+  const background = [...saltEntry, ...others];
   const buf = solveBuffer(plan, req.totalConc, req.targetPH, background, chem);
   if (!buf.ok) return buf;
   const entries = [...buf.entries, ...background];
+  const roles: RecipeLine["role"][] = [...buf.entries.map((e, i) => roleOf(plan, e.component, i)), ...saltEntry.map(() => "salt" as const), ...others.map(() => "background" as const)];
   const p = prepare(entries);
   if (!p.ok) return p;
   const eq = p.solve(chem);
   if (!eq.ok) return eq;
-  return { ok: true, entries, pH: eq.pH, ionicStrength: eq.ionicStrength, warnings: eq.warnings };
+  return { ok: true, entries, roles, pH: eq.pH, ionicStrength: eq.ionicStrength, warnings: eq.warnings };
 }
 
 function saltForIonicStrength(plan: BufferPlan, req: RecipeRequest, chem: ChemOptions): Batch {
@@ -120,7 +150,7 @@ function saltForIonicStrength(plan: BufferPlan, req: RecipeRequest, chem: ChemOp
   const gap = target - b0.ionicStrength;
   if (Math.abs(gap) <= RECIPE_I_TOLERANCE * target) return b0;
   if (gap < 0) {
-    return fail("unreachable", `The buffer alone already has an ionic strength of ${fmt(b0.ionicStrength)} mol/L, above the target ${fmt(target)} mol/L: no amount of ${salt.name} can lower it.`);
+    return fail("unreachable", `The buffer${req.background?.length ? " with the other components" : " alone"} already has an ionic strength of ${fmt(b0.ionicStrength)} mol/L, above the target ${fmt(target)} mol/L: no amount of ${salt.name} can lower it.`);
   }
   const perMole = 0.5 * salt.ions.reduce((sum, i) => sum + i.stoich * i.ion.charge * i.ion.charge, 0);
   const most = maxAddable(b0.entries, salt);
@@ -144,7 +174,6 @@ function saltForIonicStrength(plan: BufferPlan, req: RecipeRequest, chem: ChemOp
 }
 
 function roleOf(plan: BufferPlan, c: Component, index: number): RecipeLine["role"] {
-  if (index >= 2) return "salt";
   if (plan.mode === "pair") return index === 0 ? "acid form" : "base form";
   return c === plan.titrant ? "titrant" : index === 0 ? "acid form" : "base form";
 }
@@ -158,12 +187,14 @@ export function recipe(req: RecipeRequest, opts: ChemOptions = {}): RecipeResult
   const plan = planBuffer(req.acidForm, req.baseForm);
   if ("ok" in plan) return plan;
   const chem: ChemOptions = { temperatureC: o.temperatureC, activity: o.activity };
+  const badBackground = checkBackground(plan, req.background ?? []);
+  if (badBackground) return badBackground;
   const batch = req.ionicStrength === undefined ? batchAt(plan, req, 0, chem) : saltForIonicStrength(plan, req, chem);
   if (!batch.ok) return batch;
   const lines: RecipeLine[] = batch.entries.map((e, i) => {
     const mol = e.conc * req.volume;
     const stock = req.stocks?.[e.component.id];
-    const line: RecipeLine = { role: roleOf(plan, e.component, i), name: e.component.name, component: e.component, conc: e.conc, mol };
+    const line: RecipeLine = { role: batch.roles[i], name: e.component.name, component: e.component, conc: e.conc, mol };
     if (stock !== undefined) line.litres = mol / stock;
     else if (e.component.molarMass !== undefined) line.grams = mol * e.component.molarMass;
     return line;

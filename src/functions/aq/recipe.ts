@@ -5,11 +5,15 @@
  * stock concentration ("HCl 1 M", "1 M NaOH") the litres of that stock instead. Make up to the batch
  * volume with water. The forms are a conjugate pair of one system (x + y = total_conc solved for the
  * pH), or one form and a strong titrant (the titrant from the adjust workflow); with ionic_strength
- * the salt (default NaCl) is added so that the solved ionic strength equals it.
+ * the salt (default NaCl) is added so that the solved ionic strength equals it. other_names and
+ * other_amounts (read like names and amounts) are the rest of the batch, held at their amounts while
+ * the recipe is solved and listed after the buffer (and salt) rows.
  */
+import type { Mixture } from "../../chem/types";
 import { recipe as recipeOf, type RecipeRequest } from "../../chem/workflows";
 import { isBlank, plainNumber, quantity, text, type Cell } from "../args";
-import { badInput, finite, orThrow } from "../errors";
+import { AqError, badInput, finite, orThrow } from "../errors";
+import { readEntries } from "../mixture";
 import { resolveComponent } from "../substances";
 import { chemOptions } from "./options";
 import { resolveWithStock } from "./stock-name";
@@ -27,6 +31,8 @@ export function recipe(
   ionicStrength: Cell,
   salt: Cell,
   activity: Cell,
+  otherNames?: Cell,
+  otherAmounts?: Cell,
 ): unknown[][] {
   const acid = resolveWithStock(text(acidForm, "acid_form"), "acid_form");
   const base = resolveWithStock(text(baseForm, "base_form"), "base_form");
@@ -42,6 +48,8 @@ export function recipe(
     volume: quantity(volume, "volume", "volume"),
     stocks,
   };
+  const background = readBackground(otherNames, otherAmounts);
+  if (background.length > 0) req.background = background;
   if (!isBlank(ionicStrength)) {
     req.ionicStrength = quantity(ionicStrength, "ionic_strength", "concentration");
     req.salt = resolveComponent(isBlank(salt) ? "NaCl" : text(salt, "salt"));
@@ -59,4 +67,18 @@ export function recipe(
     ]);
   }
   return rows;
+}
+
+/** other_names / other_amounts: both or neither; a range of blank cells is no background. */
+function readBackground(otherNames: Cell, otherAmounts: Cell): Mixture {
+  if (isBlank(otherNames) && isBlank(otherAmounts)) return [];
+  if (isBlank(otherNames)) throw badInput("other_amounts needs other_names: give the names of the other components beside their amounts");
+  if (isBlank(otherAmounts)) throw badInput("other_names needs other_amounts: give the amount of each other component");
+  try {
+    return readEntries(otherNames, otherAmounts);
+  } catch (error) {
+    if (!(error instanceof AqError)) throw error;
+    if (/mixture is empty/.test(error.message)) return [];
+    throw new AqError(error.kind, `other components: ${error.message.replace(/^names is/, "other_names is").replace(/but amounts is/, "but other_amounts is")}`);
+  }
 }
