@@ -1,6 +1,6 @@
 /**
  * Names typed in cells → the engine's objects, through the constants library in effect (built-in ←
- * workbook ← personal, managed by the task pane).
+ * personal ← workbook, managed by the task pane).
  *
  * Caches in the functions layer belong to the library object in effect (libraryScoped): a library is
  * immutable, and every change of the constants publishes a new library object, so a change is never

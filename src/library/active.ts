@@ -1,7 +1,7 @@
 /**
  * The process-wide library in effect, shared by the custom functions and the task pane (they run
- * in one shared runtime). Starts as the built-in library; the pane sets the workbook and personal
- * layers. A layer that fails validation is never applied: the previous library stays in effect.
+ * in one shared runtime). Starts as the built-in library; the pane sets the personal and workbook
+ * layers (built-in ← personal ← workbook). A layer that fails validation is never applied: the previous library stays in effect.
  * A layer that could not be loaded (corrupt or newer blob) is recorded as a problem and left empty,
  * so the functions fall back to the layers below it.
  */
@@ -46,12 +46,14 @@ function publish(next: Library): void {
   }
 }
 
-function otherLayers(layer: UserLayer): LibraryDoc[] {
-  const lib = getActiveLibrary();
-  const others = [lib.layers.builtin];
-  const other = layer === "workbook" ? lib.layers.personal : lib.layers.workbook;
-  if (other) others.push(other);
-  return others;
+/**
+ * The layers a user layer's references (sources, systems, ions, elements) may point into: the
+ * built-in layer only. The workbook library travels with the file and must stand on what every
+ * computer has; the personal library is shared by every workbook opened on this computer and must
+ * not depend on one of them. A personal entry copied into the workbook takes what it uses with it.
+ */
+export function referenceContext(_layer: UserLayer): LibraryDoc[] {
+  return [getActiveLibrary().layers.builtin];
 }
 
 /**
@@ -62,7 +64,7 @@ function otherLayers(layer: UserLayer): LibraryDoc[] {
 export function setLayer(layer: UserLayer, data: unknown, options: { ignoreReferences?: boolean } = {}): SetLayerResult {
   let doc: LibraryDoc | null = null;
   if (data !== null && data !== undefined) {
-    const v = validateLibraryDoc(data, otherLayers(layer), options);
+    const v = validateLibraryDoc(data, referenceContext(layer), options);
     if (!v.ok) return v;
     doc = v.doc;
   }

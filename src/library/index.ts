@@ -13,7 +13,7 @@ export { validateLibraryDoc } from "./validate";
 export type { ValidationResult, ValidationCode } from "./validate";
 export { formatIssue } from "./validate/paths";
 export { computeFingerprint } from "./fingerprint";
-export { getActiveLibrary, setLayer, reportLayerProblem, getLayerProblems, onLibraryChange, resetActiveLibrary } from "./active";
+export { getActiveLibrary, referenceContext, setLayer, reportLayerProblem, getLayerProblems, onLibraryChange, resetActiveLibrary } from "./active";
 export type { UserLayer, LayerProblem, SetLayerResult } from "./active";
 export { parseLibraryText, exportLibraryText, importIntoLayer, mergeLibraryDocs, flattenLibrary, MAX_LIBRARY_BYTES } from "./io";
 export type { ParseResult, ImportResult, ImportCode } from "./io";

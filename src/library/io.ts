@@ -6,7 +6,7 @@
  * then applied. Names are stored exactly as written; nothing here interprets HTML, and the task pane
  * shows names as text. Export writes a file that imports back to the same fingerprint.
  */
-import { getActiveLibrary, setLayer, type UserLayer } from "./active";
+import { getActiveLibrary, referenceContext, setLayer, type UserLayer } from "./active";
 import type { Library } from "./layers";
 import type { LibraryDoc, SubstanceRecord, ValidationIssue } from "./types";
 import { LIBRARY_FORMAT, SCHEMA_VERSION } from "./types";
@@ -98,9 +98,7 @@ export function mergeLibraryDocs(base: LibraryDoc | null, incoming: LibraryDoc):
  */
 export function importIntoLayer(layer: UserLayer, text: string, mode: "replace" | "merge" = "replace"): ImportResult {
   const lib = getActiveLibrary();
-  const other = layer === "workbook" ? lib.layers.personal : lib.layers.workbook;
-  const context = [lib.layers.builtin, ...(other ? [other] : [])];
-  const parsed = parseLibraryText(text, context);
+  const parsed = parseLibraryText(text, referenceContext(layer));
   if (!parsed.ok) return parsed;
   const doc = mode === "merge" ? mergeLibraryDocs(lib.layers[layer], parsed.library) : parsed.library;
   return setLayer(layer, doc);

@@ -1,5 +1,5 @@
 /**
- * A library in effect: built-in (read-only) ← workbook ← personal. A higher layer's entry
+ * A library in effect: built-in (read-only) ← personal ← workbook (LAYER_ORDER). A higher layer's entry
  * overrides a lower one with the same id; the merged view says where each entry comes from and
  * what it hides. Everything derived (engine objects, the alias index, the fingerprint) is built
  * once per library, so `resolve` is a normalization and a map lookup.
@@ -12,6 +12,7 @@ import { mergeLayers, type MergedEntry } from "./merge";
 import { normalizeName } from "./normalize";
 import { closest, type Suggestion } from "./suggest";
 import type { EntryKind, LayerName, LibraryDoc, SubstanceRecord, ValidationIssue } from "./types";
+import { LAYER_ORDER } from "./types";
 import { checkSubstance, checkSystem, worldOf } from "./validate/semantics";
 import { childPath } from "./validate/paths";
 
@@ -85,7 +86,7 @@ export function createLibrary(input: LibraryLayers): Library {
   };
   Object.freeze(layers);
   const view = mergeLayers(layers);
-  const world = worldOf([layers.builtin, ...(layers.workbook ? [layers.workbook] : []), ...(layers.personal ? [layers.personal] : [])]);
+  const world = worldOf(LAYER_ORDER.map((l) => layers[l]).filter((d): d is LibraryDoc => d !== null));
   const problems: LayerIssue[] = [];
 
   const systems = new Map<string, AcidBaseSystem>();

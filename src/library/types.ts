@@ -112,7 +112,10 @@ export interface ValidationIssue {
 }
 
 export type LayerName = "builtin" | "workbook" | "personal";
-/** Lowest first: a later layer overrides an earlier one. */
-export const LAYER_ORDER: readonly LayerName[] = ["builtin", "workbook", "personal"];
+/**
+ * Lowest first: a later layer overrides an earlier one. The workbook is on top: what it carries
+ * decides on every computer, and a personal entry (this computer) only fills what it lacks.
+ */
+export const LAYER_ORDER: readonly LayerName[] = ["builtin", "personal", "workbook"];
 
 export type EntryKind = "source" | "atomicWeight" | "system" | "ion" | "substance";

@@ -2,7 +2,7 @@
  * Words for what the browser shows: layers, statuses, citations, value lines. Pure functions,
  * tested without a DOM; the views put the results into text nodes.
  */
-import { describeProvenance, formatSource } from "../library";
+import { describeProvenance, formatSource, LAYER_ORDER } from "../library";
 import type { EntryKind, LayerName, MergedEntry, SourceRecord, SubstanceRecord, SystemRecord, IonRecord, ValueRecord } from "../library";
 import { STATUS_LABEL } from "./forms";
 
@@ -125,7 +125,7 @@ export function searchText(entry: MergedEntry): string {
 }
 
 const KIND_ORDER: readonly EntryKind[] = ["substance", "system", "ion", "source", "atomicWeight"];
-const LAYER_FIRST: readonly LayerName[] = ["personal", "workbook", "builtin"];
+const LAYER_FIRST: readonly LayerName[] = [...LAYER_ORDER].reverse();
 
 /**
  * Entries whose text contains every word of the query (case-insensitive), substances first, then

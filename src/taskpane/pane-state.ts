@@ -7,7 +7,7 @@
  * store it → put it in effect (setLayer). If storing fails, nothing is put in effect; if the file is
  * invalid, nothing is stored.
  */
-import { getActiveLibrary, loadLayer, makeBlob, setLayer, validateLibraryDoc } from "../library";
+import { getActiveLibrary, loadLayer, makeBlob, referenceContext, setLayer, validateLibraryDoc } from "../library";
 import type { EntryKind, Library, LibraryDoc, UserLayer, ValidationIssue } from "../library";
 import type { FieldIssue } from "./forms";
 import type { HostInfo } from "./host";
@@ -66,7 +66,7 @@ export class PaneState {
   /** Load both stored layers; a layer that cannot be read is reported, kept untouched, and left out. */
   init(): Promise<void> {
     return this.serial(async () => {
-      for (const layer of ["workbook", "personal"] as const) {
+      for (const layer of ["personal", "workbook"] as const) {
         const where = this.stores[layer].where;
         const r = await loadLayer(layer, this.stores[layer].storage);
         if (r.ok) {
@@ -87,13 +87,9 @@ export class PaneState {
     });
   }
 
-  /**
-   * The layers a user layer's references may point into. The workbook layer travels with the file
-   * and must stand on the built-in layer alone; the personal layer may use the workbook's entries.
-   */
+  /** The layers a user layer's references may point into (the library's rule: built-in only). */
   contextFor(layer: UserLayer): LibraryDoc[] {
-    const lib = getActiveLibrary();
-    return layer === "workbook" ? [lib.layers.builtin] : [lib.layers.builtin, ...(lib.layers.workbook ? [lib.layers.workbook] : [])];
+    return referenceContext(layer);
   }
 
   layerDoc(layer: UserLayer): LibraryDoc {

@@ -6,6 +6,7 @@ import {
   getActiveLibrary,
   getLayerProblems,
   onLibraryChange,
+  referenceContext,
   reportLayerProblem,
   resetActiveLibrary,
   setLayer,
@@ -51,18 +52,23 @@ test("an invalid layer is refused with actionable errors and changes nothing", (
   expect(listener).not.toHaveBeenCalled();
 });
 
-test("a user layer may reference entries of the other user layer", () => {
+test("a user layer may not reference entries of the other user layer: each stands on the built-in layer alone", () => {
+  // The workbook travels to computers without this personal library, and the personal library is
+  // shared by every workbook: a reference across them would break on one side.
   setLayer("workbook", halvorsenLibrary());
-  const r = setLayer("personal", {
+  const uses = {
     format: "protolyte-library",
     schemaVersion: 1,
     name: "mine",
     substances: [
       { id: "hb-acid", name: "HB zwitterion acid", formula: "C8H18NO4S", nature: "weak-acid-base", systems: [{ system: "hb-zwitterion", stoich: 1, protons: 1 }] },
     ],
-  });
-  expect(r.ok ? [] : r.errors).toEqual([]);
-  expect(getActiveLibrary().resolve("HB zwitterion acid").ok).toBe(true);
+  };
+  const r = setLayer("personal", uses);
+  expect(r.ok ? [] : r.errors).toEqual([{ path: "substances[0].systems[0].system", message: expect.stringMatching(/unknown acid–base system 'hb-zwitterion'/) }]);
+  expect(getActiveLibrary().resolve("HB zwitterion acid").ok).toBe(false);
+  expect(referenceContext("workbook").map((d) => d.name)).toEqual(["Protolyte built-in"]);
+  expect(referenceContext("personal").map((d) => d.name)).toEqual(["Protolyte built-in"]);
 });
 
 test("setLayer(null) empties the layer", () => {

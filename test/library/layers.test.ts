@@ -1,5 +1,5 @@
 /**
- * Layering: built-in ← workbook ← personal. Higher layers override lower ones by id, the merged
+ * Layering: built-in ← personal ← workbook. Higher layers override lower ones by id, the merged
  * view says where each entry comes from and what it hides, and names claimed by a higher layer win.
  */
 import { BUILTIN_LIBRARY } from "../../src/library/builtin";
@@ -36,16 +36,22 @@ describe("overrides by id", () => {
     expect(lib.get("phosphate", "system")).toMatchObject({ layer: "builtin", overrides: [] });
   });
 
-  test("a personal entry overrides both, nearest layer first", () => {
-    const lib = createLibrary({ builtin: BUILTIN_LIBRARY, workbook, personal });
+  test("a personal entry overrides the built-in one when the workbook says nothing", () => {
+    const lib = createLibrary({ builtin: BUILTIN_LIBRARY, personal });
     expect(acetatePka(lib)).toBe(4.7);
-    expect(lib.get("acetate", "system")).toMatchObject({ layer: "personal", overrides: ["workbook", "builtin"] });
+    expect(lib.get("acetate", "system")).toMatchObject({ layer: "personal", overrides: ["builtin"] });
+  });
+
+  test("the workbook decides: its entry overrides a personal one, nearest layer first", () => {
+    const lib = createLibrary({ builtin: BUILTIN_LIBRARY, workbook, personal });
+    expect(acetatePka(lib)).toBe(4.76);
+    expect(lib.get("acetate", "system")).toMatchObject({ layer: "workbook", overrides: ["personal", "builtin"] });
   });
 
   test("list() shows each id once, with its layer", () => {
     const lib = createLibrary({ builtin: BUILTIN_LIBRARY, workbook, personal });
     const systems = lib.list("system");
-    expect(systems.filter((e) => e.id === "acetate").map((e) => e.layer)).toEqual(["personal"]);
+    expect(systems.filter((e) => e.id === "acetate").map((e) => e.layer)).toEqual(["workbook"]);
     expect(systems.length).toBe(BUILTIN_LIBRARY.systems!.length);
     expect(lib.list().length).toBe(
       Object.keys(BUILTIN_LIBRARY.sources!).length + Object.keys(BUILTIN_LIBRARY.atomicWeights!).length +

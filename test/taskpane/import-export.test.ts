@@ -130,16 +130,29 @@ describe("a failed import changes nothing", () => {
 });
 
 describe("import preview across layers", () => {
-  test("an entry imported into the workbook while the personal library overrides it is said to stay hidden", async () => {
+  test("an entry imported into the personal library while the workbook overrides it is said to stay hidden", async () => {
+    const { ctl } = await freshController();
+    const ion = { id: "hb-cation", name: "Halvorsen test cation", charge: 1 };
+    const workbook = file({ format: LIBRARY_FORMAT, schemaVersion: 1, name: "w", ions: [ion] });
+    await ctl.previewImport("workbook", "w.json", workbook.length, read(workbook));
+    expect((await ctl.confirmImport()).ok).toBe(true);
+    const personal = file({ format: LIBRARY_FORMAT, schemaVersion: 1, name: "p", ions: [{ ...ion, name: "personal cation" }] });
+    const p = await ctl.previewImport("personal", "p.json", personal.length, read(personal));
+    expect(p.ok && p.preview.changes).toEqual([
+      expect.objectContaining({ id: "hb-cation", action: "hidden", text: "adds a new strong ion, but your workbook strong ion stays in effect" }),
+    ]);
+  });
+
+  test("an entry imported into the workbook overrides the personal one (the workbook decides)", async () => {
     const { ctl } = await freshController();
     const ion = { id: "hb-cation", name: "Halvorsen test cation", charge: 1 };
     const personal = file({ format: LIBRARY_FORMAT, schemaVersion: 1, name: "p", ions: [ion] });
     await ctl.previewImport("personal", "p.json", personal.length, read(personal));
     expect((await ctl.confirmImport()).ok).toBe(true);
-    const workbook = file({ format: LIBRARY_FORMAT, schemaVersion: 1, name: "w", ions: [{ ...ion, name: "workbook cation" }] });
+    const workbook = file({ format: LIBRARY_FORMAT, schemaVersion: 1, name: "w", ions: [{ ...ion, charge: 2 }] });
     const p = await ctl.previewImport("workbook", "w.json", workbook.length, read(workbook));
-    expect(p.ok && p.preview.changes).toEqual([
-      expect.objectContaining({ id: "hb-cation", action: "hidden", text: "adds a new strong ion, but your personal strong ion stays in effect" }),
-    ]);
+    expect(p.ok && p.preview.changes).toEqual([expect.objectContaining({ id: "hb-cation", action: "override", text: "overrides the personal strong ion" })]);
+    expect((await ctl.confirmImport()).ok).toBe(true);
+    expect(ctl.library.ion("hb-cation")?.charge).toBe(2);
   });
 });

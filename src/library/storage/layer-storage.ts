@@ -3,7 +3,7 @@
  * cannot be read leaves the library on the layers below it and is reported (getLayerProblems); the
  * returned problem carries the raw text so it can be exported before the storage is reset.
  */
-import { getActiveLibrary, reportLayerProblem, setLayer, type SetLayerResult, type UserLayer } from "../active";
+import { referenceContext, reportLayerProblem, setLayer, type SetLayerResult, type UserLayer } from "../active";
 import type { Library } from "../layers";
 import type { LibraryDoc } from "../types";
 import { validateLibraryDoc } from "../validate";
@@ -38,9 +38,7 @@ export type SaveLayerResult =
  * changes (neither storage nor the active library) when validation or saving fails.
  */
 export async function saveLayer(layer: UserLayer, doc: LibraryDoc, storage: LibraryStorage, now?: Date): Promise<SaveLayerResult> {
-  const lib = getActiveLibrary();
-  const other = layer === "workbook" ? lib.layers.personal : lib.layers.workbook;
-  const checked = validateLibraryDoc(doc, [lib.layers.builtin, ...(other ? [other] : [])]);
+  const checked = validateLibraryDoc(doc, referenceContext(layer));
   if (!checked.ok) return checked;
   const saved = await storage.save(makeBlob(checked.doc, now));
   if (!saved.ok) return saved;
