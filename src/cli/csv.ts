@@ -1,95 +1,86 @@
 /**
- * CSV in and out (RFC 4180: comma separator, double-quoted fields, "" for a quote inside a field,
- * CRLF or LF line ends). Cells: empty → empty, a number → number, text starting with "=" → formula.
+ * CSV in and out. Reading: papaparse splits the text (RFC 4180 quoting, CRLF or LF) with the
+ * separator given or detected among , ; tab |; each field then becomes what Excel makes of it when
+ * it opens the file: empty → empty, a number → number (with a decimal comma in a ";"-separated
+ * file, the usual export where the comma is the decimal mark), a field whose first character is
+ * "=" → formula, anything else → text (" =1+1" with a leading space stays text, as in Excel).
+ * Writing: UTF-8 with a byte-order mark and CRLF line ends (what Excel opens correctly), every
+ * field holding , ; " tab CR or LF quoted, and text that a spreadsheet would run as a formula
+ * neutralised (see inert()).
  */
+import Papa from "papaparse";
 import type { RawCellContent } from "hyperformula";
 import type { CellResult } from "./evaluate";
 
-export function parseCsv(text: string): string[][] {
-  const rows: string[][] = [];
-  let row: string[] = [];
-  let field = "";
-  let quoted = false;
-  let i = 0;
+export class CsvError extends Error {}
+
+export interface ParsedCsv {
+  rows: string[][];
+  separator: string;
+}
+
+/** Splits CSV text into rows of fields. `separator`: one character, or undefined to detect it. */
+export function parseCsvText(text: string, separator?: string): ParsedCsv {
   const body = text.charCodeAt(0) === 0xfeff ? text.slice(1) : text;
-  while (i < body.length) {
-    const ch = body[i];
-    if (quoted) {
-      if (ch === '"') {
-        if (body[i + 1] === '"') {
-          field += '"';
-          i += 2;
-          continue;
-        }
-        quoted = false;
-        i++;
-        continue;
-      }
-      field += ch;
-      i++;
-      continue;
-    }
-    if (ch === '"' && field === "") {
-      quoted = true;
-      i++;
-    } else if (ch === ",") {
-      row.push(field);
-      field = "";
-      i++;
-    } else if (ch === "\n" || ch === "\r") {
-      row.push(field);
-      rows.push(row);
-      row = [];
-      field = "";
-      i += ch === "\r" && body[i + 1] === "\n" ? 2 : 1;
-    } else {
-      field += ch;
-      i++;
-    }
-  }
-  if (quoted) throw new Error("CSV: a quoted field is not closed before the end of the file");
-  if (field !== "" || row.length > 0) {
-    row.push(field);
-    rows.push(row);
-  }
-  return rows;
+  const result = Papa.parse<string[]>(body, { delimiter: separator ?? "", delimitersToGuess: [",", ";", "\t", "|"], skipEmptyLines: false });
+  const broken = result.errors.find((e) => e.type === "Quotes");
+  if (broken) throw new CsvError(`CSV: ${broken.message.toLowerCase()} (row ${(broken.row ?? 0) + 1})`);
+  const rows = result.data;
+  // A final line end gives one empty field after it: not a row.
+  while (rows.length > 0 && rows[rows.length - 1]!.length === 1 && rows[rows.length - 1]![0] === "") rows.pop();
+  return { rows, separator: result.meta.delimiter || separator || "," };
+}
+
+/** Rows of fields (comma-separated unless another separator is detected). */
+export function parseCsv(text: string): string[][] {
+  return parseCsvText(text).rows;
 }
 
 const NUMBER = /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/;
+/** A number with a decimal comma, optionally with points grouping thousands: 0,05  1.234,5  -2,5E-3. */
+const COMMA_NUMBER = /^[+-]?(\d{1,3}(\.\d{3})+|\d*)(,\d+)?([eE][+-]?\d+)?$/;
 
-/** One CSV field → what a user typing it into a cell would get. */
-export function toCellContent(field: string): RawCellContent {
+/** One CSV field → what a user typing it into a cell would get. `decimalComma`: the file's numbers use "," as decimal mark. */
+export function toCellContent(field: string, decimalComma = false): RawCellContent {
+  if (field === "") return null;
+  if (field[0] === "=") return field.length > 1 ? field : "'=";
   const text = field.trim();
-  if (text === "") return null;
-  if (text.startsWith("=")) return text;
-  if (NUMBER.test(text)) return Number(text);
-  return field;
+  if (text === "") return field;
+  if (NUMBER.test(text) && !(decimalComma && /^\d{1,3}\.\d{3}$/.test(text))) return Number(text);
+  if (decimalComma && /\d/.test(text) && COMMA_NUMBER.test(text)) return Number(text.replace(/\./g, "").replace(",", "."));
+  // The engine reads a leading apostrophe as "text follows": keep one the file really has.
+  return field[0] === "'" ? `'${field}` : field;
 }
 
-export function csvToSheet(text: string): RawCellContent[][] {
-  return parseCsv(text).map((row) => row.map(toCellContent));
+/** Decimal commas are read in a ";"-separated file (the export of Excel where "," is the decimal mark). */
+export function csvToSheet(text: string, separator?: string): RawCellContent[][] {
+  const parsed = parseCsvText(text, separator);
+  const decimalComma = parsed.separator === ";";
+  return parsed.rows.map((row) => row.map((f) => toCellContent(f, decimalComma)));
 }
 
 function quote(text: string): string {
-  return /[",\r\n]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text;
+  return /[",;\t\r\n]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text;
 }
 
 export function formatCell(cell: CellResult): string {
   if (cell === null) return "";
   if (typeof cell === "object") return cell.error;
-  if (typeof cell === "number") return String(cell);
   return String(cell);
 }
 
 /**
- * Text that a spreadsheet would read as a formula when the CSV is opened (=, +, -, @, tab, CR at the
- * start) is written with a leading apostrophe, so computed text never becomes a live formula.
+ * Computed text that a spreadsheet would read as a formula when the CSV is opened (=, +, -, @, tab,
+ * CR at the start, or right after a separator character inside the text, for a reader that splits
+ * at another separator than ours) gets an apostrophe before it, so it never becomes a live formula.
  */
 function inert(cell: CellResult): string {
   const text = formatCell(cell);
-  return typeof cell === "string" && /^[=+\-@\t\r]/.test(text) ? `'${text}` : text;
+  if (typeof cell !== "string") return text;
+  return text.replace(/^[=+\-@\t\r]/, "'$&").replace(/([,;\t|])([=+\-@])/g, "$1'$2");
 }
 
+/** CSV text for Excel: UTF-8 byte-order mark, CRLF line ends. */
 export function toCsv(values: CellResult[][]): string {
-  return values.map((row) => row.map((c) => quote(inert(c))).join(",")).join("\n") + "\n";
+  return `\ufeff${values.map((row) => row.map((c) => quote(inert(c))).join(",")).join("\r\n")}\r\n`;
 }

@@ -1,119 +1,66 @@
 /**
  * protolyte — evaluate AQ formulas and sheets without Excel, in the embedded spreadsheet engine.
+ * This file only dispatches: options are read in options.ts, each command lives in its own file.
  *
- *   protolyte eval '<formula>' [--json]
- *   protolyte sheet FILE.csv|FILE.xlsx [--out OUT.csv|OUT.xlsx] [--json]
- *
- * Exit status: 0 when evaluated (a sheet may contain error cells: they are listed), 1 when `eval`
- * gives an error value, 2 for a usage or file problem.
+ * Exit status: 0 when evaluated (a sheet may contain error cells: they are listed on stderr), 1 when
+ * `eval` gives an error value, 2 for a usage, file, limit or constants-library problem (one line
+ * on stderr, nothing written).
  */
-import { readFileSync, writeFileSync } from "node:fs";
-import { extname } from "node:path";
-import type { RawCellContent } from "hyperformula";
-import { csvToSheet, formatCell, toCsv } from "./csv";
-import { evaluateFormula, evaluateSheets, type CellResult, type SheetResult } from "./evaluate";
-import { readWorkbook, writeValues } from "./xlsx";
+import { runEval } from "./eval-command";
+import { InputError } from "./input";
+import { LibraryError } from "./library";
+import { LimitError } from "./limits";
+import { parseOptions, UsageError } from "./options";
+import { processPrinter, type Printer } from "./printer";
+import { runSheet } from "./sheet-command";
+import { CsvError } from "./csv";
 
-const USAGE = `Usage:
-  protolyte eval '<formula>' [--json]        evaluate one formula, e.g. eval '=AQ.PH({"acetic acid";"sodium acetate"},{0.1;0.1})'
-  protolyte sheet FILE.csv|FILE.xlsx [--out OUT.csv|OUT.xlsx] [--json]
-                                             evaluate every formula of a sheet and print (or write) the values
-Spilled tables print as tab-separated rows. Errors print as the error value and its message.`;
+export const USAGE = `Usage:
+  protolyte eval '<formula>' [--json] [--digits N] [--library FILE.json]…
+      evaluate one formula, e.g. eval '=AQ.PH({"acetic acid";"sodium acetate"},{0.1;0.1})'
+  protolyte sheet FILE.csv|FILE.xlsx [--out OUT.csv|OUT.xlsx] [--sheet NAME] [--json] [--digits N]
+                  [--separator C] [--library FILE.json]… [--no-workbook-library]
+      evaluate every formula of a sheet; print the values, or write them with --out
+Spilled tables print as tab-separated rows; error cells and a summary go to stderr.
+Exit status: 0 evaluated, 1 eval gave an error value, 2 usage, file, limit or library problem.`;
 
-class UsageError extends Error {}
+/** Problems that end the run with one line and exit 2. */
+const ONE_LINE = [UsageError, InputError, LimitError, LibraryError, CsvError];
 
-function formatScalar(value: CellResult): string {
-  return formatCell(value);
-}
-
-function printEval(formula: string, json: boolean): number {
-  const result = evaluateFormula(formula);
-  if (json) {
-    const out = result.error !== undefined ? { error: result.error, message: result.message ?? "" } : { value: result.value };
-    process.stdout.write(`${JSON.stringify(out)}\n`);
-  } else if (result.error !== undefined) {
-    process.stdout.write(`${result.error} ${result.message ?? ""}\n`);
-  } else if (Array.isArray(result.value)) {
-    process.stdout.write(result.value.map((row) => row.map(formatScalar).join("\t")).join("\n") + "\n");
-  } else {
-    process.stdout.write(`${formatScalar(result.value ?? null)}\n`);
-  }
-  return result.error !== undefined ? 1 : 0;
-}
-
-async function loadSheets(file: string): Promise<Record<string, RawCellContent[][]>> {
-  const ext = extname(file).toLowerCase();
-  if (ext === ".csv") return { Sheet1: csvToSheet(readFileSync(file, "utf8")) };
-  if (ext === ".xlsx") return readWorkbook(file);
-  throw new UsageError(`cannot read '${file}': use a .csv or .xlsx file`);
-}
-
-function printSheets(results: SheetResult[]): void {
-  for (const sheet of results) {
-    if (results.length > 1) process.stdout.write(`== ${sheet.name}\n`);
-    process.stdout.write(sheet.values.map((row) => row.map(formatScalar).join("\t")).join("\n") + "\n");
-    for (const e of sheet.errors) process.stdout.write(`${sheet.name}!${e.address}: ${e.error} ${e.message}\n`);
-  }
-}
-
-async function runSheet(file: string, out: string | undefined, json: boolean): Promise<number> {
-  let sheets: Record<string, RawCellContent[][]>;
+export async function main(argv: string[], print: Printer = processPrinter()): Promise<number> {
+  const command = argv[0];
   try {
-    sheets = await loadSheets(file);
+    if (command === "--help" || command === "help" || command === "-h") {
+      print.out(USAGE);
+      print.flush();
+      return 0;
+    }
+    if (command === undefined) throw new UsageError("no command given");
+    const options = parseOptions(argv.slice(1));
+    let code: number;
+    if (command === "eval") code = await runEval(options, print);
+    else if (command === "sheet") code = await runSheet(options, print);
+    else throw new UsageError(`unknown command '${command}'`);
+    print.flush();
+    return code;
   } catch (error) {
-    if (error instanceof UsageError) throw error;
-    throw new UsageError(`cannot read '${file}': ${(error as Error).message}`);
-  }
-  const results = evaluateSheets(sheets);
-  if (out !== undefined) {
-    const ext = extname(out).toLowerCase();
-    if (ext === ".csv") writeFileSync(out, toCsv(results[0]?.values ?? []));
-    else if (ext === ".xlsx") await writeValues(out, results);
-    else throw new UsageError(`cannot write '${out}': use a .csv or .xlsx file`);
-  }
-  if (json) process.stdout.write(`${JSON.stringify(results)}\n`);
-  else if (out === undefined) printSheets(results);
-  else process.stdout.write(`wrote ${out} (${results.reduce((n, s) => n + s.errors.length, 0)} error cells)\n`);
-  return 0;
-}
-
-export async function main(argv: string[]): Promise<number> {
-  const json = argv.includes("--json");
-  const rest = argv.filter((a) => a !== "--json");
-  const command = rest[0];
-  try {
-    if (command === "eval") {
-      if (rest.length !== 2) throw new UsageError("eval takes exactly one formula (quote it for the shell)");
-      return printEval(rest[1] as string, json);
+    print.flush();
+    if (command === undefined) {
+      print.note(`no command given\n${USAGE}`);
+      return 2;
     }
-    if (command === "sheet") {
-      const outAt = rest.indexOf("--out");
-      const out = outAt >= 0 ? rest[outAt + 1] : undefined;
-      if (outAt >= 0 && out === undefined) throw new UsageError("--out needs a file name");
-      const files = rest.slice(1).filter((_, i) => i + 1 !== outAt && i + 1 !== outAt + 1);
-      if (files.length !== 1) throw new UsageError("sheet takes exactly one input file");
-      return await runSheet(files[0] as string, out, json);
+    if (ONE_LINE.some((kind) => error instanceof kind)) {
+      print.note((error as Error).message);
+      return 2;
     }
-    if (command === "--help" || command === "help" || command === undefined) {
-      process.stdout.write(`${USAGE}\n`);
-      return command === undefined ? 2 : 0;
+    if (error instanceof RangeError) {
+      print.note(`the input is beyond what the headless engine can evaluate (${error.message}); see the limits in the README`);
+      return 2;
     }
-    throw new UsageError(`unknown command '${command}'`);
-  } catch (error) {
-    if (error instanceof UsageError) {
-      process.stderr.write(`protolyte: ${error.message}\n${USAGE}\n`);
+    if (error instanceof Error && /Sheet size limit exceeded/i.test(error.message)) {
+      print.note(`a sheet is larger than the engine's limits (${error.message}); see the limits in the README`);
       return 2;
     }
     throw error;
   }
-}
-
-if (require.main === module) {
-  main(process.argv.slice(2)).then(
-    (code) => process.exit(code),
-    (error) => {
-      process.stderr.write(`protolyte: ${(error as Error).stack ?? String(error)}\n`);
-      process.exit(2);
-    },
-  );
 }

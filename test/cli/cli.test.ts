@@ -2,21 +2,19 @@
  * The headless contract: `protolyte eval` and `protolyte sheet` evaluate AQ formulas in the embedded
  * spreadsheet engine as a user types them (ranges, inline arrays, spills, error values with messages).
  */
-import { execFileSync, spawnSync } from "node:child_process";
+import { execFileSync } from "node:child_process";
 import { mkdtempSync, readFileSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { parseCsv } from "../../src/cli/csv";
 import { evaluateFormula, evaluateSheets } from "../../src/cli/evaluate";
 
-const root = join(__dirname, "..", "..");
-const tsx = join(root, "node_modules", ".bin", "tsx");
-const cli = join(root, "src", "cli", "main.ts");
+import { requireBuild, root, run } from "./support/run";
 
-function run(args: string[]): { code: number | null; out: string; err: string } {
-  const r = spawnSync(tsx, [cli, ...args], { cwd: root, encoding: "utf8" });
-  return { code: r.status, out: r.stdout, err: r.stderr };
-}
+const tsx = join(root, "node_modules", ".bin", "tsx");
+const cli = join(root, "src", "cli", "bin.ts");
+
+beforeAll(requireBuild);
 
 describe("evaluateFormula", () => {
   test("potassium hydrogen phthalate 0.05 mol/L reads pH 4.005 ± 0.02", () => {
@@ -106,10 +104,11 @@ describe("protolyte command", () => {
   test("eval prints a number; --json prints {value}; an error value exits 1 with {error, message}", () => {
     const plain = run(["eval", '=AQ.PH("potassium hydrogen phthalate",0.05)']);
     expect(plain.code).toBe(0);
-    expect(Number(plain.out.trim())).toBeCloseTo(Number(plain.out.trim()), 12);
+    expect(plain.out.trim()).toMatch(/^\d+\.\d{3}$/); // a pH prints to 3 decimals
     expect(Math.abs(Number(plain.out.trim()) - 4.005)).toBeLessThanOrEqual(0.02); // Hamer et al. 1946
     const json = run(["eval", "--json", '=AQ.PH("potassium hydrogen phthalate",0.05)']);
-    expect(JSON.parse(json.out)).toEqual({ value: Number(plain.out.trim()) });
+    const full = (JSON.parse(json.out) as { value: number }).value;
+    expect(Math.abs(full - Number(plain.out.trim()))).toBeLessThanOrEqual(0.0005); // the same value, full precision
     const bad = run(["eval", "--json", '=AQ.PH("xyzzy",0.05)']);
     expect(bad.code).toBe(1);
     const parsed = JSON.parse(bad.out) as { error: string; message: string };
@@ -133,12 +132,15 @@ describe("protolyte command", () => {
   });
 
   test("usage problems exit 2 with the usage text", () => {
+    const none = run([]);
+    expect(none.code).toBe(2);
+    expect(none.err).toMatch(/Usage:/);
     const r = run(["sheet"]);
     expect(r.code).toBe(2);
-    expect(r.err).toMatch(/Usage:/);
+    expect(r.err).toBe("protolyte: sheet takes exactly one input file\n");
     const missing = run(["sheet", "/nonexistent/file.csv"]);
     expect(missing.code).toBe(2);
-    expect(missing.err).toMatch(/cannot read/);
+    expect(missing.err).toBe("protolyte: cannot read '/nonexistent/file.csv': no such file or directory\n");
   });
 });
 
@@ -149,5 +151,5 @@ test("the CLI source file is executable through tsx without a build", () => {
 
 test("CSV output never turns computed text into a live formula", () => {
   const { toCsv } = require("../../src/cli/csv") as typeof import("../../src/cli/csv");
-  expect(toCsv([["=1+1", "+SUM(A1)", "@x", "-y", "plain", -0.5]])).toBe("'=1+1,'+SUM(A1),'@x,'-y,plain,-0.5\n");
+  expect(toCsv([["=1+1", "+SUM(A1)", "@x", "-y", "plain", -0.5]])).toBe("\ufeff'=1+1,'+SUM(A1),'@x,'-y,plain,-0.5\r\n");
 });

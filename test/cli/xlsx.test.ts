@@ -47,7 +47,7 @@ describe("an XLSX with formulas stored by their file-format names", () => {
     await wb.xlsx.writeFile(file);
 
     const sheets = await readWorkbook(file);
-    expect(sheets.Batch[0][2]).toBe("=AQ.PH(A1:A2,B1:B2)");
+    expect(sheets.get("Batch")![0]![2]).toBe("=AQ.PH(A1:A2,B1:B2)");
     const [result] = evaluateSheets(sheets);
     const stored = result.values[0][2];
     expect(typeof stored).toBe("number");
