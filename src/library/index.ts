@@ -21,3 +21,7 @@ export { pKbToPKa, PKW_25C } from "./pkb";
 export type { PkbResult } from "./pkb";
 export * from "./storage";
 export { describeProvenance, formatSource } from "./provenance";
+export { takenBy, nameClaims } from "./claims";
+export type { NameClaim } from "./claims";
+export { nameCharacterProblem } from "./validate/name-chars";
+export { duplicateKey } from "./json-keys";

@@ -10,6 +10,7 @@ import { getActiveLibrary, referenceContext, setLayer, type UserLayer } from "./
 import type { Library } from "./layers";
 import type { LibraryDoc, SubstanceRecord, ValidationIssue } from "./types";
 import { LIBRARY_FORMAT, SCHEMA_VERSION } from "./types";
+import { duplicateKey } from "./json-keys";
 import { validateLibraryDoc, type ValidationCode } from "./validate";
 
 export const MAX_LIBRARY_BYTES = 5 * 1024 * 1024;
@@ -52,6 +53,11 @@ export function parseLibraryText(text: string, context: readonly LibraryDoc[] = 
     value = JSON.parse(text.charCodeAt(0) === 0xfeff ? text.slice(1) : text);
   } catch (e) {
     const message = `not valid JSON: ${(e as Error).message}`;
+    return { ok: false, code: "not-json", message, errors: [{ path: "", message }] };
+  }
+  const twice = duplicateKey(text);
+  if (twice) {
+    const message = `the key '${twice.key}' is written twice in one object (line ${twice.line}); a library file names each field once, so that no value is read in place of another`;
     return { ok: false, code: "not-json", message, errors: [{ path: "", message }] };
   }
   const v = validateLibraryDoc(value, context);

@@ -49,6 +49,8 @@ export interface Library {
   readonly problems: readonly LayerIssue[];
   /** Any alias (case-insensitive, see normalize.ts) → the engine's Component. */
   resolve(name: string): ResolveResult;
+  /** The substance entry in effect that a name means (usable or not), or undefined. */
+  ownerOf(name: string): MergedEntry<SubstanceRecord> | undefined;
   /** Closest known substances for a name (top `max`, default 3). */
   suggest(name: string, max?: number): Suggestion[];
   /** Entries in effect, of one kind or all, in layer then file order. */
@@ -148,6 +150,10 @@ export function createLibrary(input: LibraryLayers): Library {
         return { ok: false, code: "unusable", message: `'${quoteName(name)}' (${entry.layer} library) cannot be used: ${unusable.get(id)}`, suggestions: [] };
       }
       return { ok: true, component, entry, matched: key };
+    },
+    ownerOf(name: string): MergedEntry<SubstanceRecord> | undefined {
+      const id = typeof name === "string" ? index.byKey.get(normalizeName(name)) : undefined;
+      return id === undefined ? undefined : (view.substances.get(id) as MergedEntry<SubstanceRecord>);
     },
     suggest,
     list(kind?: EntryKind): MergedEntry[] {

@@ -10,7 +10,9 @@ import {
   getLayerProblems,
   MAX_LIBRARY_BYTES,
   mergeLibraryDocs,
+  nameClaims,
   parseLibraryText,
+  takenBy,
   setLayer,
   validateLibraryDoc,
 } from "../library";
@@ -19,7 +21,8 @@ import { describeImport, type ImportChange, type ImportMode } from "./import-pre
 import { duplicateDraft, editDraft, type EditDraft, type EditKind } from "./drafts";
 import { makeId } from "./entry-id";
 import { buildSource, buildSubstance, buildSystem } from "./form-to-record";
-import type { Built, SourceInput, SubstanceInput, SystemInput } from "./forms";
+import type { Built, FieldIssue, SourceInput, SubstanceInput, SystemInput } from "./forms";
+import { entryName, KIND_LABEL, LAYER_LABEL } from "./describe";
 import { clone, LAYER_DOC_NAME, SECTION, tidy } from "./layer-docs";
 import { PaneState, type ActionResult } from "./pane-state";
 import { tryMixture, type TryResult, type TryRow } from "./tryit";
@@ -36,14 +39,20 @@ export interface ImportPreview {
   next: LibraryDoc;
 }
 
+function notSaved(issues: FieldIssue[]): ActionResult {
+  return { ok: false, message: `Not saved: ${issues.length} problem${issues.length === 1 ? "" : "s"} to fix.`, issues, other: [] };
+}
+
 export class PaneController extends PaneState {
   pendingImport: ImportPreview | null = null;
 
-  private saveRecord(kind: "system" | "substance", layer: UserLayer, built: Built<SystemRecord | SubstanceRecord>, originalId: string | null, name: string): Promise<ActionResult> {
+  private saveRecord(kind: "system" | "substance", layer: UserLayer, built: Built<SystemRecord | SubstanceRecord>, originalId: string | null, name: string, takeOverNames = false): Promise<ActionResult> {
     return this.serial(async () => {
-      if (!built.ok) return { ok: false, message: `Not saved: ${built.issues.length} problem${built.issues.length === 1 ? "" : "s"} to fix.`, issues: built.issues, other: [] };
+      if (!built.ok) return notSaved(built.issues);
       const record = built.record;
       if (!record.id) record.id = makeId(name, (id) => this.taken(kind, id));
+      const refused = [...(originalId === null ? this.idRefusal(kind, record.id) : []), ...(kind === "substance" && !takeOverNames ? this.nameRefusals(record as SubstanceRecord) : [])];
+      if (refused.length) return notSaved(refused);
       const doc = this.layerDoc(layer);
       const list = ((doc[SECTION[kind]] as { id: string }[] | undefined) ?? []).slice();
       const at = list.findIndex((r) => r.id === (originalId ?? record.id));
@@ -55,19 +64,37 @@ export class PaneController extends PaneState {
     });
   }
 
+  /** A new entry never takes a taken id: refused at the field, with a free one suggested. */
+  private idRefusal(kind: EntryKind, id: string): FieldIssue[] {
+    const owner = takenBy(this.library, kind, id);
+    if (!owner) return [];
+    const free = makeId(id, (x) => this.taken(kind, x));
+    const how = owner.layer === "builtin" ? "; to override the built-in entry, use 'Override in the workbook' on it in Browse" : "; to change it, edit that entry in Browse";
+    return [{ path: "id", message: `the id '${id}' is taken by the ${LAYER_LABEL[owner.layer]} ${KIND_LABEL[kind]} '${entryName(owner)}'. Use a free id such as '${free}'${how}.` }];
+  }
+
+  /** Names a substance would take from another substance in effect, unless the user confirmed it. */
+  private nameRefusals(record: SubstanceRecord): FieldIssue[] {
+    return nameClaims(this.library, record).map((c) => ({
+      path: c.path,
+      message: `'${c.name}' already means the ${LAYER_LABEL[c.ownerLayer]} substance '${c.ownerName}' (${c.ownerId}); formulas using it would change to this entry. Remove the name, or tick 'Take over names used by other entries' to confirm.`,
+    }));
+  }
+
   saveSystem(layer: UserLayer, input: SystemInput, originalId: string | null = null): Promise<ActionResult> {
     return this.saveRecord("system", layer, buildSystem(input), originalId, input.name);
   }
 
   saveSubstance(layer: UserLayer, input: SubstanceInput, originalId: string | null = null): Promise<ActionResult> {
-    return this.saveRecord("substance", layer, buildSubstance(input), originalId, input.name);
+    return this.saveRecord("substance", layer, buildSubstance(input), originalId, input.name, input.takeOverNames === true);
   }
 
   saveSource(layer: UserLayer, input: SourceInput, originalId: string | null = null): Promise<ActionResult> {
     return this.serial(async () => {
       const built = buildSource(input);
-      if (!built.ok) return { ok: false, message: `Not saved: ${built.issues.length} problem(s) to fix.`, issues: built.issues, other: [] };
+      if (!built.ok) return notSaved(built.issues);
       const id = originalId ?? (input.id.trim() || makeId(input.title, (k) => this.taken("source", k)));
+      if (originalId === null && this.idRefusal("source", id).length) return notSaved(this.idRefusal("source", id));
       const doc = this.layerDoc(layer);
       doc.sources = { ...(doc.sources ?? {}), [id]: built.record as SourceRecord };
       const path = /^[a-z0-9][a-z0-9._-]*$/.test(id) ? `sources.${id}` : `sources[${JSON.stringify(id)}]`;

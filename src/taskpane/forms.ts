@@ -55,6 +55,8 @@ export interface SubstanceInput {
   freeH: string;
   freeOH: string;
   note: string;
+  /** The user confirmed that this entry may take lookup names other entries use now. */
+  takeOverNames?: boolean;
 }
 
 export interface SourceInput {

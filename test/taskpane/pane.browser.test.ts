@@ -178,8 +178,8 @@ describe("task pane in Chromium with office.js from the npm copy", () => {
     await page.selectOption("#kind-filter", "system");
     await entry(page, "system", "acetate").locator(".entry-head").click();
     await waitForText(entry(page, "system", "acetate"), /Built-in entries are read-only/);
-    await entry(page, "system", "acetate").getByRole("button", { name: "Duplicate to edit acetate" }).click();
-    await waitForText(page.locator("#editor-title"), "Duplicate of the built-in acid–base system 'acetate'");
+    await entry(page, "system", "acetate").getByRole("button", { name: "Override in the workbook: acetate" }).click();
+    await waitForText(page.locator("#editor-title"), "Override of the built-in acid–base system 'acetate'");
     await page.fill('[data-path="steps[0].pKa.value"]', "4.80");
     await page.click("#editor-save");
     await search(page, "acetate");

@@ -6,6 +6,7 @@
 import { parseFormula } from "../formula";
 import { normalizeName } from "../normalize";
 import type { IonRecord, LibraryDoc, SourceRecord, SubstanceRecord, SystemRecord, ValidationIssue, ValueRecord } from "../types";
+import { nameCharacterProblem } from "./name-chars";
 import { childPath } from "./paths";
 
 /** A semantic problem; `reference` marks a dangling reference (which may be mended by another layer). */
@@ -132,12 +133,21 @@ export function checkSemantics(doc: LibraryDoc, context: readonly LibraryDoc[] =
   duplicateIds(doc.ions, "ions", out);
   duplicateIds(doc.substances, "substances", out);
   for (const [el, v] of Object.entries(doc.atomicWeights ?? {})) checkValue(v, childPath("atomicWeights", el), world, out);
-  (doc.systems ?? []).forEach((s, i) => checkSystem(s, childPath("systems", i), world, out));
+  (doc.systems ?? []).forEach((s, i) => {
+    checkSystem(s, childPath("systems", i), world, out);
+    const bad = nameCharacterProblem(s.name);
+    if (bad) out.push({ path: childPath(childPath("systems", i), "name"), message: `'${s.name}' ${bad}` });
+  });
   const owners = new Map<string, { id: string; text: string }>();
   (doc.substances ?? []).forEach((s, i) => {
     const path = childPath("substances", i);
     checkSubstance(s, path, world, out);
     for (const n of lookupNames(s, path)) {
+      const bad = nameCharacterProblem(n.text);
+      if (bad) {
+        out.push({ path: n.path, message: `'${n.text}' ${bad}` });
+        continue;
+      }
       if (n.key === "") {
         out.push({ path: n.path, message: `'${n.text}' has no letters or digits to look up` });
         continue;

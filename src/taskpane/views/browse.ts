@@ -171,10 +171,11 @@ export class BrowseView {
       }, { "aria-label": `Edit ${name}` }));
     }
     if (editable) {
-      bar.appendChild(button(entry.layer === "builtin" ? "Duplicate to edit" : "Duplicate", () => {
+      const label = entry.layer === "builtin" ? "Override in the workbook…" : "Duplicate";
+      bar.appendChild(button(label, () => {
         const d = this.ctl.duplicateDraft(entry.kind as "system", entry.id);
         if (d) this.hooks.edit(d);
-      }, { "aria-label": `${entry.layer === "builtin" ? "Duplicate to edit" : "Duplicate"} ${name}` }));
+      }, { "aria-label": `${label.replace("…", "")}: ${name}` }));
     }
     if (entry.layer !== "builtin") {
       const layer = entry.layer;
@@ -201,7 +202,7 @@ export class BrowseView {
       }, { class: "danger", "aria-label": `Delete ${name}` });
       bar.appendChild(del);
     }
-    const readOnly = entry.layer === "builtin" ? el("p", { class: "hint" }, editable ? "Built-in entries are read-only: 'Duplicate to edit' copies this one into the workbook library, where it overrides the built-in entry." : "Built-in entries are read-only.") : null;
+    const readOnly = entry.layer === "builtin" ? el("p", { class: "hint" }, editable ? "Built-in entries are read-only. 'Override in the workbook' opens a copy under the same id; saving it puts it in the workbook library, where it replaces the built-in values for this workbook on every computer." : "Built-in entries are read-only.") : null;
     return el("div", {}, readOnly, bar.childNodes.length ? bar : null);
   }
 }

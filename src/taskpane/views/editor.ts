@@ -59,7 +59,7 @@ export class EditorView {
     const editing = d.originalId !== null;
     const what = { system: "acid–base system", substance: "substance form", source: "source" }[d.kind];
     const inLayer = editing && this.ctl.library.get(d.originalId as string, d.kind)?.layer === d.layer;
-    const title = !editing ? `New ${what}` : inLayer ? `Editing ${what} '${this.nameOf(d)}'` : `Duplicate of the built-in ${what} '${this.nameOf(d)}'`;
+    const title = !editing ? `New ${what}` : inLayer ? `Editing ${what} '${this.nameOf(d)}'` : `Override of the built-in ${what} '${this.nameOf(d)}'`;
     const top: Child[] = [el("h2", { id: "editor-title" }, title)];
     if (!editing) {
       const kind = select<NewKind>(d.kind, [
@@ -147,7 +147,8 @@ export class EditorView {
     for (const issue of issues) {
       const control =
         this.form.querySelector<HTMLElement>(`[data-path="${CSS.escape(issue.path)}"]:not(fieldset)`) ??
-        this.form.querySelector<HTMLElement>(`[data-path="${CSS.escape(`${issue.path}.value`)}"]`);
+        this.form.querySelector<HTMLElement>(`[data-path="${CSS.escape(`${issue.path}.value`)}"]`) ??
+        this.form.querySelector<HTMLElement>(`[data-path="${CSS.escape(issue.path.replace(/\[\d+\]$/, ""))}"]:not(fieldset)`);
       if (!control) continue;
       control.setAttribute("aria-invalid", "true");
       const err = document.getElementById(`${control.id}-err`);

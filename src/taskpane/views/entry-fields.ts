@@ -97,6 +97,9 @@ export function substanceFields(ctx: FieldsContext, input: SubstanceInput): HTML
   const aliasCheck = el("input", { type: "checkbox", id: "formula-alias" }) as HTMLInputElement;
   aliasCheck.checked = input.formulaAlias;
   aliasCheck.addEventListener("change", () => (input.formulaAlias = aliasCheck.checked));
+  const takeOver = el("input", { type: "checkbox", id: "take-over-names", "data-path": "takeOverNames" }) as HTMLInputElement;
+  takeOver.checked = input.takeOverNames === true;
+  takeOver.addEventListener("change", () => (input.takeOverNames = takeOver.checked));
   const sysRows = input.systems.map((row, i) =>
     el(
       "div",
@@ -128,6 +131,7 @@ export function substanceFields(ctx: FieldsContext, input: SubstanceInput): HTML
     field("Other names (one per line)", textArea(input.aliases, (v) => (input.aliases = v)), { path: "aliases" }).wrap,
     field("Formula of the form weighed", textInput(input.formula, (v) => (input.formula = v), { placeholder: "Na2HPO4·7H2O" }), { path: "formula", hint: "Hydrate water included; the molar mass is computed from it." }).wrap,
     el("div", { class: "check" }, aliasCheck, el("label", { for: "formula-alias" }, "The formula is also a name to look it up by")),
+    el("div", { class: "check" }, takeOver, el("label", { for: "take-over-names" }, "Take over names used by other entries (formulas using them change to this entry)")),
     el("details", { open: input.formula === "" || input.molarMass.value !== "" }, el("summary", {}, "Molar mass (when there is no formula)"), valueFields(ctx.library, input.molarMass, "molarMass", "Molar mass, g/mol")),
     el("div", { class: "row" }, field("Kind", select(input.nature, NATURES, (v) => (input.nature = v)), { path: "nature" }).wrap, field("State", select(input.state, STATES, (v) => (input.state = v)), { path: "state" }).wrap),
     el("fieldset", {}, el("legend", {}, "Acid–base systems it releases"), el("p", { class: "hint" }, "Dissociable H⁺ carried: protons the weighed form still holds on the system (Na₂HPO₄: 1 of 3; a free base: 0)."), ...sysRows, el("div", { class: "actions" }, button("Add a system", () => {
