@@ -21,7 +21,7 @@ export const CATALOGUE: readonly CatalogueEntry[] = [
   {
     id: "ADJUST",
     fn: AQ.ADJUST,
-    params: [req("names"), req("amounts"), req("target_pH"), req("titrant"), opt("titrant_conc"), opt("volume"), opt("temperature"), opt("activity")],
+    params: [req("names"), req("amounts"), req("target_pH"), req("titrant"), opt("titrant_conc"), opt("volume"), opt("temperature"), opt("activity"), opt("measured_pH")],
     result: "scalar",
   },
   { id: "BETA", fn: AQ.BETA, params: [req("names"), req("amounts"), opt("temperature"), opt("activity")], result: "scalar" },

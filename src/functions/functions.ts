@@ -54,6 +54,7 @@ export function PH(names: any[][], amounts: any[][], temperature?: any, activity
  * @param [volume] Batch volume, L (or unit text such as "800 L"). Needs titrant_conc.
  * @param [temperature] Temperature, °C (0–100). Default 25.
  * @param [activity] Activity model: "davies" (default), "ideal" or "debye-huckel".
+ * @param [measured_pH] The pH read on the batch. The gap to the computed pH is taken as an unknown excess of strong acid or base, and the titrant is computed from the batch as measured.
  * @returns mol of titrant per litre of mixture; or litres of stock for the batch when titrant_conc and volume are given.
  */
 export function ADJUST(
@@ -65,8 +66,9 @@ export function ADJUST(
   volume?: any,
   temperature?: any,
   activity?: string,
+  measured_pH?: any,
 ): number {
-  return guard(() => adjust(names, amounts, target_pH, titrant, titrant_conc, volume, temperature, activity));
+  return guard(() => adjust(names, amounts, target_pH, titrant, titrant_conc, volume, temperature, activity, measured_pH));
 }
 
 /**

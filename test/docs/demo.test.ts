@@ -87,6 +87,14 @@ describe.each([
     expectWithin(numberAt(result, rowOf(cells, "check: pH after the addition"), 1), target, 0.001, "pH after the ADJUST addition");
   });
 
+  test("RECIPE with the NaCl held fixed reads the target fed back; the recipe without it misses; ADJUST from the measured pH equals the back-fit", () => {
+    const { cells, result } = get();
+    const target = numberAt(result, rowOf(cells, "target pH"), 1);
+    expectWithin(numberAt(result, rowOf(cells, "check: pH of HB-217S"), 1), target, 0.0005, "saline recipe fed back at 5 °C");
+    expect(Math.abs(numberAt(result, rowOf(cells, "pH at 5 degC (misses the target)"), 1) - target)).toBeGreaterThan(0.01);
+    expect(result.values[rowOf(cells, "same as the back-fit of section 7?")][1]).toBe("yes");
+  });
+
   test("the specification block and the what-if grid compute", () => {
     const { cells, result } = get();
     expect(result.values[rowOf(cells, "band inside the specification?")][1]).toBe("yes");

@@ -67,3 +67,41 @@ describe("AQ.RECIPE other_names / other_amounts", () => {
     ['=AQ.RECIPE("KH2PO4","Na2HPO4",7,0.05,1,25,,,,{"NaCl"},{-0.1})', /other components: .*negative/],
   ])("%s is #VALUE!", (formula, message) => expectError(formula, "#VALUE!", message));
 });
+
+describe("AQ.ADJUST measured_pH", () => {
+  const PHOS = '{"NaH2PO4·H2O";"Na2HPO4·7H2O"},{0.018375;0.031625}';
+
+  test("500 L of 50 mM phosphate reads 7.35, must be 7.10: litres of 1 M HCl; the batch as measured plus that HCl reads 7.10", () => {
+    const litres = num(`=AQ.ADJUST(${PHOS},7.1,"HCl",1,"500 L",25,,7.35)`);
+    // The batch as it really is: the nominal composition plus the NaOH excess that reads 7.35.
+    const e = num(`=AQ.ADJUST(${PHOS},7.35,"NaOH")`);
+    expectNear(num(`=AQ.PH({"NaH2PO4·H2O";"Na2HPO4·7H2O";"NaOH"},{0.018375;0.031625;${e}})`), 7.35, 1e-9, "true batch reads 7.35");
+    const d = 500 / (500 + litres);
+    const after = num(`=AQ.PH({"NaH2PO4·H2O";"Na2HPO4·7H2O";"NaOH";"HCl"},{${0.018375 * d};${0.031625 * d};${e * d};${litres / (500 + litres)}})`);
+    expectNear(after, 7.1, 1e-6, `pH after ${litres} L of 1 M HCl`);
+  });
+
+  test("the figures on the ADJUST page: right when the excess is strong base, off when the buffer total is wrong", () => {
+    const model = num(`=AQ.ADJUST(${PHOS},7.1,"HCl",1,500,25,,7.35)`);
+    expectNear(model, 3.07, 0.005, "from the measured pH");
+    // Too much Na2HPO4·7H2O: the extra that reads 7.35, then the HCl the real batch needs.
+    const extra = num(`=AQ.ADJUST(${PHOS},7.35,"Na2HPO4·7H2O")`);
+    expectNear(extra * 1000, 31.6, 0.05, "mM of Na2HPO4·7H2O too much");
+    expectNear(num(`=AQ.ADJUST({"NaH2PO4·H2O";"Na2HPO4·7H2O"},{0.018375;${0.031625 + extra}},7.1,"HCl",1,500)`), 4.8, 0.005, "real need, too much Na2HPO4");
+    // NaH2PO4·H2O short by 7.9 mM (10.49 mM instead of 18.375): reads 7.35 too.
+    const short = '{"NaH2PO4·H2O";"Na2HPO4·7H2O"},{0.010492;0.031625}';
+    expectNear(num(`=AQ.PH(${short})`), 7.35, 0.0005, "NaH2PO4 short reads 7.35");
+    expectNear(num(`=AQ.ADJUST(${short},7.1,"HCl",1,500)`), 2.63, 0.005, "real need, NaH2PO4 short");
+  });
+
+  test("without measured_pH, the same call starts from the computed pH and gives less HCl", () => {
+    const fromMeasured = num(`=AQ.ADJUST(${PHOS},7.1,"HCl",1,500,25,,7.35)`);
+    const fromComputed = num(`=AQ.ADJUST(${PHOS},7.1,"HCl",1,500)`);
+    expect(fromComputed).toBeLessThan(fromMeasured);
+  });
+
+  test.each([
+    [`=AQ.ADJUST(${PHOS},7.1,"HCl",,,25,,"seven")`, /measured_pH must be a finite number/],
+    [`=AQ.ADJUST(${PHOS},7.1,"HCl",,,25,,16)`, /measured pH 16 is outside/],
+  ])("%s is #VALUE!", (formula, message) => expectError(formula, "#VALUE!", message));
+});

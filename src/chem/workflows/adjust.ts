@@ -14,6 +14,14 @@
  * guaranteed bracket, refined by Brent's method to |pH − target| ≤ 1e-11. A target that no grid
  * point crosses is "unreachable", with a message saying which way the titrant moves the pH and how
  * far it can take it (unreachable.ts). A target equal to the current pH gives 0.
+ *
+ * From a measured pH (opts.measuredPH): the mixture as given is what the batch should contain; the
+ * difference between its computed pH and the measured one is attributed to an unknown excess of
+ * strong base (measured above computed) or strong acid (below), one monovalent counter-ion per mole
+ * (strong-reagents.ts). The excess e ≥ 0 solves pH(mixture + e) = measured by the same per-litre
+ * search; the titrant is then computed from that measured state. The assumption is wrong when the
+ * deviation has another cause (a wrong buffer concentration, the wrong salt form, CO₂ uptake): the
+ * answer is then off by the difference in buffer value between the assumed and the real batch.
  */
 import { fail } from "../failure";
 import { prepare } from "../prepared";
@@ -22,7 +30,8 @@ import { resolveOptions } from "../validate-options";
 import { firstCrossing, geometricGrid } from "./crossing";
 import { compact, maxAddable, mixedWithStock, pHOffset, withAdded } from "./mixing";
 import { unreachable } from "./unreachable";
-import { checkPositive, checkTargetPH, checkTitrant } from "./validate";
+import { STRONG_ACID, STRONG_BASE } from "./strong-reagents";
+import { checkPositive, checkTargetPH, checkTitrant, fmtPH } from "./validate";
 
 export interface AdjustStock {
   /** Stock concentration of the titrant, mol/L. */
@@ -34,6 +43,16 @@ export interface AdjustStock {
 export interface AdjustOptions extends ChemOptions {
   /** Given: the answer is litres of stock for the batch, dilution included. */
   stock?: AdjustStock;
+  /** The pH read on the batch: the gap to the computed pH is taken as an excess of strong acid or base. */
+  measuredPH?: number;
+}
+
+/** The unknown excess behind a measured pH, mol/L of the generic strong reagent (0: none). */
+export interface AdjustExcess {
+  reagent: "strong base" | "strong acid";
+  conc: number;
+  /** The pH computed from the mixture as given, before the excess. */
+  computedPH: number;
 }
 
 export interface AdjustValue {
@@ -49,6 +68,8 @@ export interface AdjustValue {
   ionicStrength: number;
   /** The engine's warnings about the final solution. */
   warnings: string[];
+  /** With a measured pH: the excess of strong acid or base that explains it. */
+  excess?: AdjustExcess;
 }
 
 export type AdjustResult = Result<AdjustValue>;
@@ -79,8 +100,33 @@ export function adjust(mix: Mixture, titrant: Component, targetPH: number, opts:
   if (bad) return bad;
   const prepared = prepare(mix);
   if (!prepared.ok) return prepared;
-  const one = compact(mix);
-  return opts.stock === undefined ? adjustPerLitre(one, titrant, targetPH, chem) : adjustWithStock(one, titrant, targetPH, opts.stock, chem);
+  let one = compact(mix);
+  let excess: AdjustExcess | undefined;
+  if (opts.measuredPH !== undefined) {
+    const state = measuredState(one, opts.measuredPH, chem);
+    if (!state.ok) return state;
+    one = state.mixture;
+    excess = state.excess;
+  }
+  const r = opts.stock === undefined ? adjustPerLitre(one, titrant, targetPH, chem) : adjustWithStock(one, titrant, targetPH, opts.stock, chem);
+  return r.ok && excess !== undefined ? { ...r, excess } : r;
+}
+
+/** The mixture plus the excess of strong base or acid that gives the measured pH. */
+function measuredState(mix: Mixture, measured: number, chem: ChemOptions): Result<{ mixture: Mixture; excess: AdjustExcess }> {
+  const bad = checkTargetPH(measured, "measured pH");
+  if (bad) return bad;
+  const start = pHOffset(mix, measured, chem);
+  if (!start.ok) return start;
+  const computedPH = start.value + measured;
+  const reagent = start.value < 0 ? STRONG_BASE : STRONG_ACID;
+  const r = adjustPerLitre(mix, reagent, measured, chem);
+  if (!r.ok) {
+    const why = r.code === "unreachable" ? `no excess of ${reagent.name} explains it (${r.message})` : r.message;
+    return fail(r.code, `The measured pH ${fmtPH(measured, computedPH)} differs from the computed ${fmtPH(computedPH, measured)}, and ${why}`);
+  }
+  const excess: AdjustExcess = { reagent: reagent === STRONG_BASE ? "strong base" : "strong acid", conc: r.value, computedPH };
+  return { ok: true, mixture: withAdded(mix, reagent, r.value), excess };
 }
 
 function adjustPerLitre(mix: Mixture, titrant: Component, target: number, chem: ChemOptions): AdjustResult {

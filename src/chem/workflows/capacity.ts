@@ -13,20 +13,16 @@
  * and the acid path (which raises I by ½·dC_a while lowering the pH) differ by the ionic-strength
  * term: see test/chem/workflows/capacity.test.ts for the size.
  */
-import type { ChemOptions, Component, Mixture, Result, StrongIon } from "../types";
+import type { ChemOptions, Mixture, Result } from "../types";
 import { fail, fmt } from "../failure";
 import { resolveOptions } from "../validate-options";
 import { adjust } from "./adjust";
 import { pHOf } from "./mixing";
 import { checkTargetPH } from "./validate";
 
-const BASE_CATION: StrongIon = { id: "strong-base cation (+1)", name: "M+", charge: 1 };
-const ACID_ANION: StrongIon = { id: "strong-acid anion (−1)", name: "X-", charge: -1 };
+import { STRONG_ACID, STRONG_BASE } from "./strong-reagents";
 
-/** One monovalent cation per mole, its OH⁻ found by the charge balance (as NaOH). */
-export const STRONG_BASE: Component = { id: "strong base", name: "strong base", systems: [], ions: [{ ion: BASE_CATION, stoich: 1 }] };
-/** One monovalent anion per mole, its H⁺ found by the charge balance (as HCl). */
-export const STRONG_ACID: Component = { id: "strong acid", name: "strong acid", systems: [], ions: [{ ion: ACID_ANION, stoich: 1 }] };
+export { STRONG_ACID, STRONG_BASE };
 
 export interface CapacityValue {
   /** mol/L of the reagent, ≥ 0. */

@@ -2,7 +2,7 @@
  * Formulation workflows on top of the equilibrium engine: titrant to a target pH, buffer capacity,
  * titration curves, the pH band over tolerances, and buffer recipes. Pure: no Office API, no DOM.
  */
-export { adjust, ADJUST_PH_TOLERANCE, type AdjustOptions, type AdjustStock, type AdjustValue, type AdjustResult } from "./adjust";
+export { adjust, ADJUST_PH_TOLERANCE, type AdjustOptions, type AdjustExcess, type AdjustStock, type AdjustValue, type AdjustResult } from "./adjust";
 export { capacity, STRONG_BASE, STRONG_ACID, type CapacityValue, type CapacityResult } from "./capacity";
 export { curve, CURVE_POINTS_DEFAULT, CURVE_POINTS_MIN, CURVE_POINTS_MAX, type CurveRequest, type CurvePoint, type CurveValue, type CurveResult } from "./curve";
 export { EQUIVALENCE_PROMINENCE, type EquivalencePoint } from "./equivalence";

@@ -1,7 +1,9 @@
 /**
  * AQ.ADJUST: titrant to reach a target pH — mol per litre of mixture, or, with a stock concentration
  * and a batch volume, litres of stock for the batch (dilution included). An unreachable target is
- * #N/A with a message saying which way the titrant moves the pH and how far it can go.
+ * #N/A with a message saying which way the titrant moves the pH and how far it can go. With
+ * measured_pH, the titrant is computed from the batch as measured: the gap between the computed and
+ * the measured pH is taken as an unknown excess of strong acid or base (chem/workflows/adjust.ts).
  */
 import { adjust as adjustMixture } from "../../chem/workflows";
 import { isBlank, plainNumber, quantity, text, type Cell } from "../args";
@@ -20,11 +22,12 @@ export function adjust(
   volume: Cell,
   temperature: Cell,
   activity: Cell,
+  measuredPH?: Cell,
 ): number {
   const { mixture } = readMixture(names, amounts);
   const target = plainNumber(targetPH, "target_pH");
   const component = resolveComponent(text(titrant, "titrant"));
-  const options = chemOptions(temperature, activity);
+  const options = { ...chemOptions(temperature, activity), ...(isBlank(measuredPH) ? {} : { measuredPH: plainNumber(measuredPH, "measured_pH") }) };
   if (isBlank(titrantConc) && isBlank(volume)) {
     return finite(trustIonicStrength(orThrow(adjustMixture(mixture, component, target, options)), "the titrant amount").value, "titrant amount");
   }
