@@ -2,6 +2,7 @@
  * Quantities derived from the constants or the equilibrium: apparent pKa, osmolarity, ionic strength.
  */
 import { activityShape } from "./activity/model";
+import { isActivityModel, unknownActivityModelMessage } from "./activity/models";
 import { debyeHuckelA } from "./activity/debye-huckel-a";
 import { solveEquilibrium } from "./equilibrium";
 import { fail, fmt } from "./failure";
@@ -31,9 +32,7 @@ export function apparentPKa(
   if (typeof ionicStrength !== "number" || !Number.isFinite(ionicStrength) || ionicStrength < 0) {
     return fail("bad-input", `Ionic strength must be a number ≥ 0 mol/L, got ${fmt(ionicStrength)}.`);
   }
-  if (!["davies", "ideal", "debye-huckel"].includes(model)) {
-    return fail("bad-input", `Unknown activity model "${String(model)}": use "davies", "ideal" or "debye-huckel".`);
-  }
+  if (!isActivityModel(model)) return fail("bad-input", unknownActivityModelMessage(String(model)));
   const pK = thermodynamicPKa(step, temperatureC);
   if (!pK.ok) return pK;
   const zA = system.topCharge - stepIndex;

@@ -33,6 +33,17 @@ export { idealLog10Gamma } from "./activity/ideal";
 export { log10Gamma } from "./activity/model";
 export { apparentPKa, osmolarity, ionicStrength } from "./derived";
 export { classifyRegime } from "./regime";
+export { parseDecimal, readDecimal, leadingDecimal } from "./number-text";
 export { parseQuantity, type QuantityDimension, type ParseOptions } from "./units";
 export * from "./workflows";
-export { activityModelNamed } from "./activity/names";
+export {
+  ACTIVITY_MODELS,
+  ACTIVITY_MODEL_IDS,
+  activityModelNamed,
+  activityModelChoices,
+  isActivityModel,
+  unknownActivityModelMessage,
+  readActivityModel,
+} from "./activity/models";
+export { checkTemperature, readTemperature } from "./validate-options";
+export { isBlankCell, cellPosition, pairShapeProblem, pairAt, EMPTY_MIXTURE_MESSAGE } from "./name-amount-pairs";

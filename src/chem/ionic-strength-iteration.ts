@@ -10,6 +10,7 @@
  * Each evaluation of G warm-starts the charge balance from the previous root, so after the first,
  * cold, solve most evaluations take two or three Newton steps. The ideal model needs one solve.
  */
+import { ACTIVITY_MODELS } from "./activity/models";
 import { SOLVER } from "./defaults";
 import type { ChargeBalanceSolver } from "./solver-core";
 import type { ActivityModel } from "./types";
@@ -28,7 +29,7 @@ export function solveCoupled(core: ChargeBalanceSolver, model: ActivityModel): b
   core.setIonicStrength(I);
   if (!core.solveLnH(NaN)) return false;
   core.outerIterations = 1;
-  if (model === "ideal") {
+  if (!ACTIVITY_MODELS[model].dependsOnIonicStrength) {
     core.setIonicStrength(core.ionicFromSpeciation);
     return true;
   }

@@ -17,7 +17,7 @@
  * The ionic-strength iteration around it is in ionic-strength-iteration.ts.
  */
 import { activityShape, activityShapeDerivative } from "./activity/model";
-import { SOLVER } from "./defaults";
+import { DEFAULTS, SOLVER } from "./defaults";
 import { LN10, ZERO_CELSIUS_K } from "./physical-constants";
 import { pKaAtTemperature } from "./temperature";
 import type { ActivityModel, AcidBaseSystem } from "./types";
@@ -66,7 +66,7 @@ export class ChargeBalanceSolver {
   readonly pMin: number;
 
   temperatureC = NaN;
-  model: ActivityModel = "ideal";
+  model: ActivityModel = DEFAULTS.activity; // set by every solve
   kwT = NaN;
   debyeA = NaN;
   /** Ionic strength the conditional constants are set for, mol/L. */

@@ -7,8 +7,10 @@
  * from the constants library; src/functions and src/cli call the engine with them).
  */
 
-/** Activity-coefficient model used for every charged species. */
-export type ActivityModel = "davies" | "ideal" | "debye-huckel";
+import type { ActivityModelId } from "./activity/models";
+
+/** Activity-coefficient model used for every charged species (the list: activity/models.ts). */
+export type ActivityModel = ActivityModelId;
 
 /** One stepwise dissociation HₙL → H⁺ + Hₙ₋₁L, thermodynamic (I = 0) at 25 °C. */
 export interface PkaStep {

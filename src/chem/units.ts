@@ -17,6 +17,7 @@
  * "g L^-1"). Unit symbols are case-sensitive, as in SI: "mM" is millimolar, "mm" is not a unit here.
  */
 import { fail, fmt } from "./failure";
+import { leadingDecimal, parseDecimal } from "./number-text";
 import { readUnit, TEMPERATURE, type Dims } from "./unit-symbols";
 import type { Result } from "./types";
 
@@ -64,9 +65,6 @@ function convert(x: number, d: Dims, unit: string, dim: QuantityDimension, text:
   return fail("bad-input", `"${text}" has unit ${unit}, which is not a ${dim}: use for example ${EXAMPLES[dim]}.`);
 }
 
-const DECIMAL = /^[+-]?(\d+\.?\d*|\.\d+)(e[+-]?\d+)?$/i;
-const LEADING_NUMBER = /^[+-]?(\d+\.?\d*|\.\d+)(e[+-]?\d+)?/i;
-
 /** Concentrations, volumes and amounts cannot be negative; temperatures in °C can. */
 function nonNegative(value: number, dim: QuantityDimension, text: string): Result<{ value: number }> {
   if (dim !== "temperature" && value < 0) return fail("bad-input", `A ${dim} cannot be negative (${text}).`);
@@ -106,23 +104,23 @@ export function parseQuantity(
   if (typeof value !== "string") return fail("bad-input", `Expected a number or unit text for the ${dimension}.`);
   const text = value.trim();
   if (text === "") return fail("bad-input", `Empty text where a ${dimension} was expected.`);
-  // Decimal text only: Number() would also read "0x10", "0b11", "0o17" (16, 3, 15).
-  if (DECIMAL.test(text)) {
-    const plain = Number(text);
+  // Decimal text only (number-text.ts): Number() would also read "0x10", "0b11", "0o17".
+  const plain = parseDecimal(text);
+  if (plain !== null) {
     if (!Number.isFinite(plain)) return fail("bad-input", `"${text}" is too large to be a ${dimension}.`);
     return nonNegative(plain, dimension, text);
   }
-  const lead = LEADING_NUMBER.exec(text);
-  const unit = normaliseDegrees((lead ? text.slice(lead[0].length) : text).trim());
+  const lead = leadingDecimal(text);
+  const unit = normaliseDegrees((lead ? lead.rest : text).trim());
   if (!lead) {
     const known = Object.prototype.hasOwnProperty.call(TEMPERATURE, unit) || readUnit(unit).ok;
     return known
       ? fail("bad-input", `"${text}" has no number; write for example ${EXAMPLES[dimension]}.`)
       : fail("bad-input", `Cannot read "${text}" as a ${dimension}: it does not start with a number; use for example ${EXAMPLES[dimension]}.`);
   }
-  const x = Number(lead[0]);
+  const x = lead.value;
   if (!Number.isFinite(x)) return fail("bad-input", `"${text}" is too large to be a ${dimension}.`);
-  const rest = text.slice(lead[0].length);
+  const rest = lead.rest;
   if (rest.startsWith(",")) {
     return fail("bad-input", `Cannot read "${text}" as a ${dimension}: write the number with a decimal point, for example ${EXAMPLES[dimension]}.`);
   }

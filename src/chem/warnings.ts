@@ -1,4 +1,5 @@
 /** Plain-language warnings attached to an equilibrium. */
+import { ACTIVITY_MODELS } from "./activity/models";
 import { DEFAULTS, LIMITS } from "./defaults";
 import { fmt } from "./failure";
 import type { AcidBaseSystem, ActivityModel } from "./types";
@@ -8,7 +9,7 @@ export function ionicStrengthWarning(I: number, model: ActivityModel): string | 
   if (I > LIMITS.ionicStrengthStrong) {
     return `Ionic strength ${fmt(I)} mol/L is above ${LIMITS.ionicStrengthStrong} mol/L: the ${model} activity model is unreliable here, treat the pH as a rough estimate.`;
   }
-  const caution = model === "debye-huckel" ? LIMITS.debyeHuckelCaution : LIMITS.ionicStrengthCaution;
+  const caution = ACTIVITY_MODELS[model].cautionAbove;
   if (I > caution) {
     return `Ionic strength ${fmt(I)} mol/L is above ${caution} mol/L: the ${model} activity model loses accuracy here.`;
   }

@@ -10,6 +10,7 @@
  */
 import Papa from "papaparse";
 import type { RawCellContent } from "hyperformula";
+import { parseDecimal, parseDecimalComma } from "../chem/number-text";
 import type { CellResult } from "./evaluate";
 
 export class CsvError extends Error {}
@@ -36,18 +37,16 @@ export function parseCsv(text: string): string[][] {
   return parseCsvText(text).rows;
 }
 
-const NUMBER = /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/;
-/** A number with a decimal comma, optionally with points grouping thousands: 0,05  1.234,5  -2,5E-3. */
-const COMMA_NUMBER = /^[+-]?(\d{1,3}(\.\d{3})+|\d*)(,\d+)?([eE][+-]?\d+)?$/;
-
 /** One CSV field → what a user typing it into a cell would get. `decimalComma`: the file's numbers use "," as decimal mark. */
 export function toCellContent(field: string, decimalComma = false): RawCellContent {
   if (field === "") return null;
   if (field[0] === "=") return field.length > 1 ? field : "'=";
   const text = field.trim();
   if (text === "") return field;
-  if (NUMBER.test(text) && !(decimalComma && /^\d{1,3}\.\d{3}$/.test(text))) return Number(text);
-  if (decimalComma && /\d/.test(text) && COMMA_NUMBER.test(text)) return Number(text.replace(/\./g, "").replace(",", "."));
+  // Number text: src/chem/number-text.ts ("−" stays text, as when typed into a cell). With decimal
+  // commas, "1.234" is one thousand two hundred and thirty-four, not a decimal point number.
+  const n = decimalComma ? parseDecimalComma(text) : parseDecimal(text, { unicodeMinus: false });
+  if (n !== null) return n;
   // The engine reads a leading apostrophe as "text follows": keep one the file really has.
   return field[0] === "'" ? `'${field}` : field;
 }

@@ -3,15 +3,13 @@
  * optional arguments as null, and empty cells as "" (or 0 for number ranges). Every problem becomes
  * a #VALUE! error whose message names the argument, the cell and what is wrong.
  */
-import { activityModelNamed, parseQuantity } from "../chem";
+import { cellPosition, isBlankCell, DEFAULTS, parseDecimal, parseQuantity, readActivityModel, readTemperature } from "../chem";
 import type { ActivityModel } from "../chem/types";
-import { badInput } from "./errors";
+import { badInput, orThrow } from "./errors";
 
 export type Cell = unknown;
 
-export function isBlank(value: Cell): boolean {
-  return value === null || value === undefined || (typeof value === "string" && value.trim() === "");
-}
+export const isBlank: (value: Cell) => boolean = isBlankCell;
 
 /** A range or single value as a flat list in reading order (row by row), with cell positions. */
 export function cellsOf(value: Cell): { value: Cell; row: number; col: number }[] {
@@ -32,13 +30,8 @@ export function shapeOf(value: Cell): [number, number] {
   return [value.length, cols];
 }
 
-/** "item 3" for a flat list, "row 2, column 1" for a table — counted from 1 as a user counts. */
-export function position(row: number, col: number, shape: [number, number]): string {
-  if (shape[0] === 1 && shape[1] === 1) return "";
-  if (shape[1] === 1) return ` (item ${row + 1})`;
-  if (shape[0] === 1) return ` (item ${col + 1})`;
-  return ` (row ${row + 1}, column ${col + 1})`;
-}
+/** "item 3" for a flat list, "row 2, column 1" for a table (src/chem/name-amount-pairs.ts). */
+export const position: (row: number, col: number, shape: [number, number]) => string = cellPosition;
 
 /** A text cell, trimmed; numbers are accepted as text (a substance could be named "2"). */
 export function text(value: Cell, what: string): string {
@@ -73,12 +66,6 @@ export function quantity(
   return parsed.value;
 }
 
-/**
- * Decimal number text as a user types it ("7", "-0.5", ".5", "1e-3"). JavaScript's Number() also
- * reads "0x10", "0b11" and "0o17" as 16, 3 and 15: a cell never means those.
- */
-const DECIMAL = /^[+-]?(\d+\.?\d*|\.\d+)(e[+-]?\d+)?$/i;
-
 /** A plain number (no units), e.g. a pH or a count. */
 export function plainNumber(value: Cell, what: string, fallback?: number): number {
   if (isBlank(value)) {
@@ -87,28 +74,18 @@ export function plainNumber(value: Cell, what: string, fallback?: number): numbe
   }
   if (typeof value === "boolean") throw badInput(`${what} must be a number, not ${value ? "TRUE" : "FALSE"}`);
   const trimmed = typeof value === "string" ? value.trim() : "";
-  const n = typeof value === "number" ? value : DECIMAL.test(trimmed) ? Number(trimmed) : NaN;
+  const n = typeof value === "number" ? value : (parseDecimal(trimmed) ?? NaN);
   if (!Number.isFinite(n)) throw badInput(`${what} must be a finite number, got ${describe(value)}`);
   return n;
 }
 
-export const TEMPERATURE_MIN_C = 0;
-export const TEMPERATURE_MAX_C = 100;
-
-/** Temperature in °C (number or "37 degC", "310 K"), 0–100 °C, default 25. */
+/** Temperature in °C (number or "37 degC", "310 K"); the default and the range: src/chem (readTemperature). */
 export function temperature(value: Cell): number {
-  const t = quantity(value, "temperature", "temperature", { fallback: 25 });
-  if (t < TEMPERATURE_MIN_C || t > TEMPERATURE_MAX_C) {
-    throw badInput(`temperature ${t} °C is outside 0–100 °C, the range the constants are valid for`);
-  }
-  return t;
+  const t = quantity(value, "temperature", "temperature", { fallback: DEFAULTS.temperatureC });
+  return orThrow(readTemperature(t)).value;
 }
 
-/** "davies" (default), "ideal" or "debye-huckel". */
+/** An activity model by any of its names; blank for the default (the models: src/chem/activity/models.ts). */
 export function activity(value: Cell): ActivityModel {
-  if (isBlank(value)) return "davies";
-  const key = text(value, "activity").toLowerCase();
-  const model = activityModelNamed(key);
-  if (model === undefined) throw badInput(`activity '${key}' is not known: use "davies", "ideal" or "debye-huckel"`);
-  return model;
+  return orThrow(readActivityModel(isBlank(value) ? "" : text(value, "activity"))).model;
 }

@@ -10,7 +10,7 @@
  * The key is built by hand rather than with JSON.stringify, which is slower here and cannot tell
  * NaN, ±Infinity, undefined and null apart (all "null") nor -0 from 0.
  */
-import { prepare, type PreparedMixture } from "../chem";
+import { EMPTY_MIXTURE_MESSAGE, pairAt, pairShapeProblem, prepare, type PreparedMixture } from "../chem";
 import type { Component, Mixture } from "../chem/types";
 import { cellsOf, isBlank, position, quantity, shapeOf, text, type Cell } from "./args";
 import { badInput, orThrow } from "./errors";
@@ -100,13 +100,11 @@ function readPair(
   col: number,
   shape: [number, number],
 ): void {
-  if (isBlank(nameCell)) {
-    if (!isBlank(amount) && amount !== 0) throw badInput(`amount ${String(amount)}${position(row, col, shape)} has no substance name beside it`);
-    return;
-  }
+  const pair = pairAt(nameCell, amount, row, col, shape);
+  if (pair === "skip") return;
+  if (pair !== "pair") throw badInput(pair);
   const name = typeof nameCell === "string" ? nameCell.trim() : text(nameCell, `name${position(row, col, shape)}`);
   const component = resolveComponent(name);
-  if (isBlank(amount)) throw badInput(`no amount for '${name}'${position(row, col, shape)}`);
   const conc =
     typeof amount === "number" && Number.isFinite(amount) && amount >= 0
       ? amount // what quantity() returns for a plain non-negative number, without building its messages
@@ -122,9 +120,8 @@ export function readEntries(names: Cell, amounts: Cell): { component: Component;
     // The usual case, two sheet ranges: read in place, no per-cell objects.
     const rows = names.length;
     const cols = names[0].length;
-    if (amounts.length !== rows || amounts[0].length !== cols) {
-      throw badInput(`names is ${rows}×${cols} cells but amounts is ${amounts.length}×${amounts[0].length}: give one amount per name`);
-    }
+    const mismatch = pairShapeProblem([rows, cols], [amounts.length, amounts[0].length]);
+    if (mismatch !== null) throw badInput(mismatch);
     const shape: [number, number] = [rows, cols];
     for (let r = 0; r < rows; r++) {
       const nRow = names[r];
@@ -134,14 +131,13 @@ export function readEntries(names: Cell, amounts: Cell): { component: Component;
   } else {
     const nShape = shapeOf(names);
     const aShape = shapeOf(amounts);
-    if (nShape[0] !== aShape[0] || nShape[1] !== aShape[1]) {
-      throw badInput(`names is ${nShape[0]}×${nShape[1]} cells but amounts is ${aShape[0]}×${aShape[1]}: give one amount per name`);
-    }
+    const mismatch = pairShapeProblem(nShape, aShape);
+    if (mismatch !== null) throw badInput(mismatch);
     const nameCells = cellsOf(names);
     const amountCells = cellsOf(amounts);
     nameCells.forEach((cell, i) => readPair(entries, cell.value, amountCells[i]?.value, cell.row, cell.col, nShape));
   }
-  if (entries.length === 0) throw badInput("the mixture is empty: give at least one substance name with its amount");
+  if (entries.length === 0) throw badInput(EMPTY_MIXTURE_MESSAGE);
   return entries;
 }
 

@@ -3,6 +3,7 @@
  * is read. Pure: no DOM, no storage. Fields → records is form-to-record.ts, records → fields
  * record-to-form.ts, ids from names entry-id.ts.
  */
+import { readDecimal } from "../chem";
 import type { PhysicalState, SourceRecord, SubstanceNature, ValueStatus } from "../library";
 
 /** A problem at a field of the entry being edited: path relative to the entry ("steps[0].pKa.value"). */
@@ -121,10 +122,7 @@ export function emptySource(): SourceInput {
   return { id: "", kind: "", title: "", authors: "", container: "", edition: "", volume: "", pages: "", year: "", doi: "", url: "", locators: "", note: "" };
 }
 
-/** A number as typed: accepts the Unicode minus and surrounding spaces. */
+/** A number as typed in a field (the one rule for number text: src/chem/number-text.ts). */
 export function readNumber(text: string): number | null {
-  const t = text.trim().replace(/\u2212/g, "-");
-  if (t === "" || !/^[-+]?(\d+\.?\d*|\.\d+)(e[-+]?\d+)?$/i.test(t)) return null;
-  const n = Number(t);
-  return Number.isFinite(n) ? n : null;
+  return readDecimal(text);
 }

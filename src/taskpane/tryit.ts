@@ -2,7 +2,7 @@
  * The "try it" calculation: names and amounts → pH, through the library in effect and the same
  * engine the spreadsheet functions use (src/chem), so an entry added in the pane is seen at work.
  */
-import { parseQuantity, solveEquilibrium, DEFAULTS } from "../chem";
+import { parseQuantity, readTemperature, solveEquilibrium, DEFAULTS } from "../chem";
 import type { ActivityModel, Mixture, Regime } from "../chem";
 import type { Library, LayerName } from "../library";
 
@@ -50,13 +50,9 @@ export function readMixture(library: Library, rows: readonly TryRow[], temperatu
   const mix: Mixture = [];
   const used: UsedEntry[] = [];
   let temperatureC: number = DEFAULTS.temperatureC;
-  if (temperatureText.trim() !== "") {
-    const t = parseQuantity(/^[-+]?[\d.]+$/.test(temperatureText.trim()) ? Number(temperatureText.trim()) : temperatureText, "temperature");
-    if (!t.ok) issues.push({ row: -1, field: "temperature", message: t.message });
-    else if (t.value < DEFAULTS.minTemperatureC || t.value > DEFAULTS.maxTemperatureC) {
-      issues.push({ row: -1, field: "temperature", message: `${t.value} °C is outside ${DEFAULTS.minTemperatureC}–${DEFAULTS.maxTemperatureC} °C` });
-    } else temperatureC = t.value;
-  }
+  const t = readTemperature(temperatureText);
+  if (!t.ok) issues.push({ row: -1, field: "temperature", message: t.message });
+  else temperatureC = t.value;
   rows.forEach((row, i) => {
     if (row.name.trim() === "" && row.amount.trim() === "") return;
     const found = library.resolve(row.name);

@@ -200,12 +200,12 @@ describe("values → the pane's rows", () => {
   });
 
   test("problems are messages", () => {
-    expect(mixtureFromValues([["a"], ["b"]], [[1, 2]])).toEqual({ ok: false, message: "the names are 2×1 cells but the amounts are 1×2: the AQ functions pair them cell by cell" });
+    expect(mixtureFromValues([["a"], ["b"]], [[1, 2]])).toEqual({ ok: false, message: "names is 2×1 cells but amounts is 1×2: give one amount per name, paired cell by cell" });
     expect(mixtureFromValues([["a"]], [["#N/A"]])).toEqual({ ok: false, message: "a name or amount cell shows #N/A" });
     expect(mixtureFromValues([["a"], ["b"]], [[1], [{ error: "#REF!" }]])).toEqual({ ok: false, message: "a name or amount cell (item 2) shows #REF!" });
-    expect(mixtureFromValues([[""]], [[""]])).toEqual({ ok: false, message: "the names and amounts are all blank" });
+    expect(mixtureFromValues([[""]], [[""]])).toEqual({ ok: false, message: "the mixture is empty: give at least one substance name with its amount" });
     expect(mixtureFromValues([["a"]], [[1]], [[25, 30]])).toEqual({ ok: false, message: "the temperature must be one cell, not 1×2 cells" });
-    expect(mixtureFromValues([["a"]], [[1]], null, [["fancy"]])).toEqual({ ok: false, message: "the activity model 'fancy' is not known (davies, ideal or debye-huckel)" });
+    expect(mixtureFromValues([["a"]], [[1]], null, [["fancy"]])).toEqual({ ok: false, message: 'The activity model "fancy" is not known: use "davies", "ideal" or "debye-huckel".' });
     expect(mixtureFromValues([["a"]], [[true]])).toEqual({ ok: false, message: "a name or amount is TRUE/FALSE" });
   });
 

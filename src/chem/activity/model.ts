@@ -1,33 +1,18 @@
 /**
- * Dispatch by activity model. Every model has the form log10 γ(z) = −A z² f(I); neutral species have
- * γ = 1 (no salting-out term).
+ * Dispatch by activity model (the models and their shapes: models.ts). Every model has the form
+ * log10 γ(z) = −A z² f(I); neutral species have γ = 1 (no salting-out term).
  */
 import type { ActivityModel } from "../types";
-import { daviesShape, daviesShapeDerivative } from "./davies";
-import { debyeHuckelShape, debyeHuckelShapeDerivative } from "./debye-huckel";
+import { ACTIVITY_MODELS } from "./models";
 
 /** f(I) of the model. */
 export function activityShape(model: ActivityModel, ionicStrength: number): number {
-  switch (model) {
-    case "davies":
-      return daviesShape(ionicStrength);
-    case "debye-huckel":
-      return debyeHuckelShape(ionicStrength);
-    default:
-      return 0;
-  }
+  return ACTIVITY_MODELS[model].shape(ionicStrength);
 }
 
 /** df/dI of the model. */
 export function activityShapeDerivative(model: ActivityModel, ionicStrength: number): number {
-  switch (model) {
-    case "davies":
-      return daviesShapeDerivative(ionicStrength);
-    case "debye-huckel":
-      return debyeHuckelShapeDerivative(ionicStrength);
-    default:
-      return 0;
-  }
+  return ACTIVITY_MODELS[model].shapeDerivative(ionicStrength);
 }
 
 /** log10 γ of an ion of charge z at ionic strength I (mol/L) and Debye–Hückel A. */

@@ -23,5 +23,5 @@ export function pka(substance: Cell, step: Cell, temperature: Cell, ionicStrengt
   if (I > DEFAULTS.maxConcentration) {
     throw badInput(`ionic strength ${I} mol/L is above ${DEFAULTS.maxConcentration} mol/L, far beyond the range of the activity models`);
   }
-  return finite(orThrow(apparentPKa(system, k - 1, t, I, "davies")).value, "pKa");
+  return finite(orThrow(apparentPKa(system, k - 1, t, I, DEFAULTS.activity)).value, "pKa");
 }

@@ -1,10 +1,9 @@
 /**
  * The values of a formula's names, amounts, temperature and activity arguments (inline or loaded
  * from the sheet) → the rows, temperature and activity model the pane's mixture reader takes
- * (tryit.ts). Pairing follows the AQ functions: names and amounts of the same shape, cell by cell,
- * rows with both cells blank skipped. Pure.
+ * (tryit.ts). Pairing is the AQ functions' rule (src/chem/name-amount-pairs.ts). Pure.
  */
-import { activityModelNamed, type ActivityModel } from "../../chem";
+import { cellPosition, EMPTY_MIXTURE_MESSAGE, pairAt, pairShapeProblem, readActivityModel, type ActivityModel } from "../../chem";
 import type { TryRow } from "../tryit";
 import type { CellValue } from "./aq-call";
 
@@ -60,36 +59,35 @@ function single(v: CellValue[][] | null, what: string): { ok: true; value: CellV
 export function mixtureFromValues(names: CellValue[][], amounts: CellValue[][], temperature: CellValue[][] | null = null, activity: CellValue[][] | null = null): SpecResult {
   const rowsN = names.length;
   const colsN = names[0]?.length ?? 0;
-  if (amounts.length !== rowsN || amounts.some((r) => r.length !== colsN) || names.some((r) => r.length !== colsN)) {
-    return { ok: false, message: `the names are ${shape(names)} cells but the amounts are ${shape(amounts)}: the AQ functions pair them cell by cell` };
-  }
+  const grid: [number, number] = [rowsN, colsN];
+  const mismatch = pairShapeProblem(grid, [amounts.length, amounts[0]?.length ?? 0]);
+  if (mismatch !== null) return { ok: false, message: mismatch };
+  // Excel's values are rectangular; anything else is refused rather than read in part
+  if (amounts.some((r) => r.length !== colsN) || names.some((r) => r.length !== colsN)) return { ok: false, message: "the names or the amounts are not a rectangular range" };
   const rows: TryRow[] = [];
   for (let r = 0; r < rowsN; r++) {
     for (let c = 0; c < colsN; c++) {
       const n = names[r][c];
       const a = amounts[r][c];
-      const where = rowsN * colsN > 1 ? ` (item ${r * colsN + c + 1})` : "";
+      const where = cellPosition(r, c, grid);
       const bad = errorText(n) ?? errorText(a);
       if (bad) return { ok: false, message: `a name or amount cell${where} shows ${bad}` };
-      if (blank(n) && blank(a)) continue;
       if (typeof n === "boolean" || typeof a === "boolean") return { ok: false, message: `a name or amount${where} is TRUE/FALSE` };
-      rows.push({ name: blank(n) ? "" : String(n).trim(), amount: blank(a) ? "" : String(a).trim() });
+      const pair = pairAt(n, a, r, c, grid);
+      if (pair === "skip") continue;
+      if (pair !== "pair") return { ok: false, message: pair };
+      rows.push({ name: String(n).trim(), amount: String(a).trim() });
     }
   }
-  if (rows.length === 0) return { ok: false, message: "the names and amounts are all blank" };
+  if (rows.length === 0) return { ok: false, message: EMPTY_MIXTURE_MESSAGE };
   const t = single(temperature, "temperature");
   if (!t.ok) return t;
   if (typeof t.value === "boolean") return { ok: false, message: "the temperature is TRUE/FALSE" };
   const m = single(activity, "activity");
   if (!m.ok) return m;
-  let model: ActivityModel = "davies";
-  if (!blank(m.value)) {
-    const key = String(m.value).trim().toLowerCase();
-    const named = activityModelNamed(key);
-    if (named === undefined) return { ok: false, message: `the activity model '${key}' is not known (davies, ideal or debye-huckel)` };
-    model = named;
-  }
-  return { ok: true, spec: { rows, temperature: blank(t.value) ? "" : String(t.value).trim(), activity: model } };
+  const model = readActivityModel(blank(m.value) ? "" : String(m.value));
+  if (!model.ok) return { ok: false, message: model.message };
+  return { ok: true, spec: { rows, temperature: blank(t.value) ? "" : String(t.value).trim(), activity: model.model } };
 }
 
 /** A number in the unit the functions take (mol/L, L) as text with that unit; text stays as written. */

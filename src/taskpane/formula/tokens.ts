@@ -8,6 +8,7 @@
  * they can be refused by name), error literals (#N/A), names and functions (AQ.PH, _xldudf_AQ_PH),
  * operators, and the punctuation of calls and inline arrays.
  */
+import { leadingDecimal } from "../../chem/number-text";
 
 export type TokenKind =
   | "string"
@@ -57,7 +58,6 @@ const ROW = String.raw`\$?\d+`;
 /** A reference after an optional sheet: a cell or cell range, a column range, a row range; not followed by a name character or "(". */
 const REF_RE = new RegExp(String.raw`^(?:${CELL}(?::${CELL})?|${COL}:${COL}|${ROW}:${ROW})(?![\w.(!?\\])`);
 const NAME_RE = /^[A-Za-z_\\\u00C0-\uFFFF][\w.\\?\u00C0-\uFFFF]*/;
-const NUMBER_RE = /^(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?/;
 /** An unquoted sheet (or [book]sheet, or sheet:sheet) before "!". */
 const BARE_SHEET_RE = /^(?:\[[^\]]+\])?[^\s'!(),;{}"#+\-*/^&=<>%@:[\]]+(?::[^\s'!(),;{}"#+\-*/^&=<>%@:[\]]+)?!/;
 const OPS = ["<=", ">=", "<>", "+", "-", "*", "/", "^", "&", "=", "<", ">", "%", ":", "@"];
@@ -150,9 +150,10 @@ export function tokenize(formula: string): Token[] {
       push("ref", ref[0], { value: plainAddress(ref[0]) });
       continue;
     }
-    const num = NUMBER_RE.exec(rest);
+    // a number literal: decimal text (src/chem/number-text.ts) whose sign, if any, is an operator here
+    const num = /^[\d.]/.test(rest) ? leadingDecimal(rest) : null;
     if (num) {
-      push("number", num[0]);
+      push("number", rest.slice(0, rest.length - num.rest.length));
       continue;
     }
     const name = NAME_RE.exec(rest);

@@ -5,6 +5,7 @@
  * read again whenever the selection changes while this view is open; in a plain browser page, or
  * when the selected cell has no usable AQ formula, the Try it panel's mixture.
  */
+import { ACTIVITY_MODELS } from "../../chem";
 import { el, replaceChildren } from "../dom";
 import type { PaneController } from "../controller";
 import { pictureOf, titrantOf, type PictureRequest } from "../charts/picture";
@@ -23,7 +24,6 @@ export interface PictureDeps {
   excel: SelectionExcel | null;
 }
 
-const ACTIVITY_TEXT = { davies: "Davies activity", ideal: "ideal (no activity correction)", "debye-huckel": "extended Debye–Hückel activity" } as const;
 
 export class PictureView {
   private titrant: TitrantName | "auto" = "auto";
@@ -212,7 +212,7 @@ export class PictureView {
     const d = pic.speciation;
     replaceChildren(
       this.facts,
-      el("p", { class: "result" }, "pH ", el("span", { class: "ph", id: "picture-ph" }, d.mixturePH.toFixed(2)), ` · ${conditions(d)} · ${ACTIVITY_TEXT[d.activity]}`),
+      el("p", { class: "result" }, "pH ", el("span", { class: "ph", id: "picture-ph" }, d.mixturePH.toFixed(2)), ` · ${conditions(d)} · ${ACTIVITY_MODELS[d.activity].label}`),
       d.warnings.length ? message("warn", "Note:", d.warnings) : null,
     );
     replaceChildren(this.spec, ...(d.systems.length ? d.systems.map((sys) => speciationFigure(sys, d)) : [el("p", {}, "No acid–base system in this mixture: nothing to show here.")]));
