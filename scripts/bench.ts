@@ -208,7 +208,7 @@ function partA2(): void {
     { component: component("acetic acid"), conc: a },
     { component: component("sodium acetate"), conc: b },
   ]);
-  const PH = AQ.PH as (n: unknown, a: unknown, t: unknown, m: unknown) => number;
+  const PH = (n: unknown, a: unknown, t: unknown, m: unknown): number => (AQ.PH as (...x: unknown[]) => number[][])(n, a, t, m)[0][0];
   const engine = rate((i) => {
     const r = solvePH(mixtures[i % SHEET_ROWS], {});
     return r.ok ? r.pH : NaN;
@@ -381,8 +381,8 @@ function partC(): void {
   check(ADJUST !== undefined && RECIPE !== undefined, "AQ.ADJUST and AQ.RECIPE must exist");
   const names = [["NaH2PO4"], ["Na2HPO4"]];
   const amounts = [[0.03], [0.02]];
-  const r1 = rate((i) => ADJUST!(names, amounts, targets[i % 101], "NaOH") as number);
-  const r2 = rate((i) => ADJUST!(names, amounts, targets[i % 101], "NaOH", 1, 800) as number);
+  const r1 = rate((i) => (ADJUST!(names, amounts, targets[i % 101], "NaOH") as number[][])[0][0]);
+  const r2 = rate((i) => (ADJUST!(names, amounts, targets[i % 101], "NaOH", 1, 800) as number[][])[0][0]);
   rows.push(["AQ.ADJUST(phosphate 30/20 mM, target, \"NaOH\")  mol/L", fmtRate(r1), fmtMicro(r1)]);
   rows.push(["AQ.ADJUST(..., \"NaOH\", 1, 800)  litres of 1 M stock for 800 L", fmtRate(r2), fmtMicro(r2)]);
   const r3 = rate((i) => (RECIPE!("NaH2PO4", "Na2HPO4", targets[i % 101], 0.05, 1) as unknown[][]).length);
@@ -450,7 +450,7 @@ function partD(): void {
  */
 async function partE(): Promise<void> {
   console.log("\n(e) Batching pattern (calls collected in one tick, equal mixtures solved once, promises resolved) vs synchronous calls");
-  const PH = AQ.PH as (n: unknown, a: unknown, t: unknown, m: unknown) => number;
+  const PH = (n: unknown, a: unknown, t: unknown, m: unknown): number => (AQ.PH as (...x: unknown[]) => number[][])(n, a, t, m)[0][0];
   const names = [["acetic acid", "sodium acetate"]];
   const rows = Array.from({ length: SHEET_ROWS }, (_, i) => [amountsOf(i)]);
   type Pending = { amounts: unknown; resolve: (v: number) => void; reject: (e: unknown) => void };

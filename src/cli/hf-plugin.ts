@@ -17,6 +17,7 @@ import {
 } from "hyperformula";
 import "../functions/runtime-shim";
 import { CATALOGUE, type CatalogueEntry } from "../functions/catalogue";
+import { tableRows } from "../functions/rowwise";
 
 type Ast = { args: any[] };
 type State = any;
@@ -76,6 +77,7 @@ function toHyperFormulaError(error: unknown): CellError {
 
 function toHyperFormulaScalar(value: unknown): unknown {
   if (value === null || value === undefined) return "";
+  if (value instanceof CustomFunctions.Error) return toHyperFormulaError(value); // a row's error in a row-wise table
   if (typeof value === "number" || typeof value === "string" || typeof value === "boolean") return value;
   return String(value);
 }
@@ -119,6 +121,7 @@ function buildPlugin(): typeof FunctionPlugin {
           const result = call(entry, values);
           if (entry.result === "scalar") return toHyperFormulaScalar(result);
           const rows = matrixOf(result);
+          if (entry.result === "column" && rows.length === 1 && rows[0].length === 1) return toHyperFormulaScalar(rows[0][0]);
           const size = sizeOf(rows);
           return SimpleRangeValue.onlyValues(fit(rows, size) as never);
         } catch (error) {
@@ -126,6 +129,18 @@ function buildPlugin(): typeof FunctionPlugin {
         }
       });
     };
+
+    if (entry.result === "column") {
+      // One value, or a row-wise table: its size follows from the shapes of the arguments alone.
+      proto[sizeMethod] = function (this: AqPlugin & { evaluateAst: Function }, ast: Ast, state: State) {
+        try {
+          const rows = tableRows(ast.args.map((a) => shapeOfArgument(this, a, state)));
+          return rows === 0 ? ArraySize.scalar() : new ArraySize(1, rows);
+        } catch {
+          return ArraySize.scalar();
+        }
+      };
+    }
 
     if (entry.result === "matrix") {
       // HyperFormula reserves a spill area before evaluation: compute the table once to learn its size.
@@ -145,11 +160,29 @@ function buildPlugin(): typeof FunctionPlugin {
       method,
       parameters,
       vectorizationForbidden: true,
-      ...(entry.result === "matrix" ? { sizeOfResultArrayMethod: sizeMethod } : {}),
+      ...(entry.result !== "scalar" ? { sizeOfResultArrayMethod: sizeMethod } : {}),
     };
   }
   (AqPlugin as unknown as { implementedFunctions: unknown }).implementedFunctions = implemented;
   return AqPlugin;
+}
+
+const ONE_CELL_AST = new Set(["EMPTY", "NUMBER", "STRING", "CELL_REFERENCE"]);
+
+/**
+ * [rows, columns] of one argument, read from the formula where it is a cell range or a literal (no
+ * evaluation: the cells may not be computed yet), otherwise from its value.
+ */
+function shapeOfArgument(plugin: { evaluateAst: Function }, ast: any, state: State): [number, number] {
+  // HyperFormula's AstNodeType values (the enum is not exported).
+  if (ast === undefined || ONE_CELL_AST.has(ast.type)) return [1, 1];
+  if (ast.type === "CELL_RANGE") {
+    const start = ast.start.toSimpleCellAddress(state.formulaAddress);
+    const end = ast.end.toSimpleCellAddress(state.formulaAddress);
+    return [Math.abs(end.row - start.row) + 1, Math.abs(end.col - start.col) + 1];
+  }
+  const value = plugin.evaluateAst(ast, state);
+  return value instanceof SimpleRangeValue ? [value.height(), value.width()] : [1, 1];
 }
 
 function sizeOf(rows: unknown[][]): ArraySize {
@@ -162,7 +195,7 @@ let registered = false;
 
 /** Registers the AQ functions once per process (HyperFormula keeps a global plugin registry). */
 /** Ids of the AQ functions that return tables (their spill size is predicted before evaluation). */
-export const TABLE_FUNCTIONS: readonly string[] = CATALOGUE.filter((e) => e.result === "matrix").map((e) => `AQ.${e.id}`);
+export const TABLE_FUNCTIONS: readonly string[] = CATALOGUE.filter((e) => e.result !== "scalar").map((e) => `AQ.${e.id}`);
 
 export function registerAqFunctions(): void {
   if (registered) return;

@@ -10,26 +10,31 @@ export interface CatalogueEntry {
   id: string;
   fn: (...args: any[]) => unknown;
   params: { name: string; optional: boolean }[];
-  result: "scalar" | "matrix";
+  /**
+   * "column": one value, or one value per row of a row-wise table (./rowwise): declared any[][] for
+   * Excel, sized from its arguments' shapes (tableRows) by the headless engine. AQ.SPECIES is row-wise
+   * too but stays "matrix": without a species it gives its full table, sized by computing it.
+   */
+  result: "scalar" | "matrix" | "column";
 }
 
 const req = (name: string) => ({ name, optional: false });
 const opt = (name: string) => ({ name, optional: true });
 
 export const CATALOGUE: readonly CatalogueEntry[] = [
-  { id: "PH", fn: AQ.PH, params: [req("names"), req("amounts"), opt("temperature"), opt("activity")], result: "scalar" },
+  { id: "PH", fn: AQ.PH, params: [req("names"), req("amounts"), opt("temperature"), opt("activity")], result: "column" },
   {
     id: "ADJUST",
     fn: AQ.ADJUST,
     params: [req("names"), req("amounts"), req("target_pH"), req("titrant"), opt("titrant_conc"), opt("volume"), opt("temperature"), opt("activity"), opt("measured_pH")],
-    result: "scalar",
+    result: "column",
   },
-  { id: "BETA", fn: AQ.BETA, params: [req("names"), req("amounts"), opt("temperature"), opt("activity")], result: "scalar" },
-  { id: "CAPACITY", fn: AQ.CAPACITY, params: [req("names"), req("amounts"), req("delta_pH"), opt("temperature"), opt("activity")], result: "scalar" },
+  { id: "BETA", fn: AQ.BETA, params: [req("names"), req("amounts"), opt("temperature"), opt("activity")], result: "column" },
+  { id: "CAPACITY", fn: AQ.CAPACITY, params: [req("names"), req("amounts"), req("delta_pH"), opt("temperature"), opt("activity")], result: "column" },
   { id: "SPECIES", fn: AQ.SPECIES, params: [req("names"), req("amounts"), opt("species"), opt("temperature"), opt("activity")], result: "matrix" },
-  { id: "CHECK", fn: AQ.CHECK, params: [req("names"), req("amounts"), opt("temperature"), opt("activity")], result: "scalar" },
-  { id: "IONIC", fn: AQ.IONIC, params: [req("names"), req("amounts"), opt("temperature")], result: "scalar" },
-  { id: "OSMOLARITY", fn: AQ.OSMOLARITY, params: [req("names"), req("amounts"), opt("temperature")], result: "scalar" },
+  { id: "CHECK", fn: AQ.CHECK, params: [req("names"), req("amounts"), opt("temperature"), opt("activity")], result: "column" },
+  { id: "IONIC", fn: AQ.IONIC, params: [req("names"), req("amounts"), opt("temperature")], result: "column" },
+  { id: "OSMOLARITY", fn: AQ.OSMOLARITY, params: [req("names"), req("amounts"), opt("temperature")], result: "column" },
   { id: "PKA", fn: AQ.PKA, params: [req("substance"), opt("step"), opt("temperature"), opt("ionic_strength")], result: "scalar" },
   { id: "MOLARMASS", fn: AQ.MOLARMASS, params: [req("substance")], result: "scalar" },
   {

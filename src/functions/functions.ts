@@ -7,12 +7,17 @@
  * Excel passes null for an omitted optional argument, so optional parameters are declared `?` and
  * defaults are applied inside (`??`), never as TypeScript default values.
  *
+ * The functions that give one value take a whole table too (./rowwise): names as one row, amounts
+ * N×k, any later argument one value or an N×1 column → one result per row. They are declared
+ * any[][] (a single result is a 1×1 table, which Excel shows as the value) so that a table spills.
+ *
  * The same function objects are registered in HyperFormula for headless use (src/cli/hf-plugin.ts).
  */
 // First: outside Excel (a plain browser page) the CustomFunctions global is missing, and the
 // associate calls the metadata plugin appends to this file would throw without it.
 import "./runtime-shim";
 import { guard } from "./errors";
+import { rowwise } from "./rowwise";
 import { adjust } from "./aq/adjust";
 import { capacity } from "./aq/capacity";
 import { curve } from "./aq/curve";
@@ -36,10 +41,10 @@ import { species as speciesTable } from "./aq/species";
  * @param amounts Concentration of each substance in the final solution, mol/L, or text with a unit such as "25 mM" or "2.1 g/L"; same shape as names.
  * @param [temperature] Temperature, °C (0–100). Default 25.
  * @param [activity] Activity model: "davies" (default), "ideal" or "debye-huckel".
- * @returns pH (activity scale).
+ * @returns pH (activity scale). Row-wise: names as one row and amounts with one row per mixture give one result per row (a spilled column).
  */
-export function PH(names: any[][], amounts: any[][], temperature?: any, activity?: string): number {
-  return guard(() => ph(names, amounts, temperature, activity));
+export function PH(names: any[][], amounts: any[][], temperature?: any[][], activity?: any[][]): any[][] {
+  return rowwise(ph, names, amounts, temperature, activity);
 }
 
 /**
@@ -55,20 +60,20 @@ export function PH(names: any[][], amounts: any[][], temperature?: any, activity
  * @param [temperature] Temperature, °C (0–100). Default 25.
  * @param [activity] Activity model: "davies" (default), "ideal" or "debye-huckel".
  * @param [measured_pH] The pH read on the batch. The gap to the computed pH is taken as an unknown excess of strong acid or base, and the titrant is computed from the batch as measured.
- * @returns mol of titrant per litre of mixture; or litres of stock for the batch when titrant_conc and volume are given.
+ * @returns mol of titrant per litre of mixture; or litres of stock for the batch when titrant_conc and volume are given. Row-wise: names as one row and amounts with one row per mixture give one result per row (a spilled column).
  */
 export function ADJUST(
   names: any[][],
   amounts: any[][],
-  target_pH: any,
-  titrant: string,
-  titrant_conc?: any,
-  volume?: any,
-  temperature?: any,
-  activity?: string,
-  measured_pH?: any,
-): number {
-  return guard(() => adjust(names, amounts, target_pH, titrant, titrant_conc, volume, temperature, activity, measured_pH));
+  target_pH: any[][],
+  titrant: any[][],
+  titrant_conc?: any[][],
+  volume?: any[][],
+  temperature?: any[][],
+  activity?: any[][],
+  measured_pH?: any[][],
+): any[][] {
+  return rowwise(adjust, names, amounts, target_pH, titrant, titrant_conc, volume, temperature, activity, measured_pH);
 }
 
 /**
@@ -79,10 +84,10 @@ export function ADJUST(
  * @param amounts Concentrations, mol/L (or unit text), same shape as names.
  * @param [temperature] Temperature, °C (0–100). Default 25.
  * @param [activity] Activity model: "davies" (default), "ideal" or "debye-huckel".
- * @returns β, mol/(L·pH).
+ * @returns β, mol/(L·pH). Row-wise: names as one row and amounts with one row per mixture give one result per row (a spilled column).
  */
-export function BETA(names: any[][], amounts: any[][], temperature?: any, activity?: string): number {
-  return guard(() => beta(names, amounts, temperature, activity));
+export function BETA(names: any[][], amounts: any[][], temperature?: any[][], activity?: any[][]): any[][] {
+  return rowwise(beta, names, amounts, temperature, activity);
 }
 
 /**
@@ -94,10 +99,10 @@ export function BETA(names: any[][], amounts: any[][], temperature?: any, activi
  * @param delta_pH Change in pH: positive for base, negative for acid.
  * @param [temperature] Temperature, °C (0–100). Default 25.
  * @param [activity] Activity model: "davies" (default), "ideal" or "debye-huckel".
- * @returns mol/L of strong base (delta > 0) or strong acid (delta < 0), as a positive number.
+ * @returns mol/L of strong base (delta > 0) or strong acid (delta < 0), as a positive number. Row-wise: names as one row and amounts with one row per mixture give one result per row (a spilled column).
  */
-export function CAPACITY(names: any[][], amounts: any[][], delta_pH: any, temperature?: any, activity?: string): number {
-  return guard(() => capacity(names, amounts, delta_pH, temperature, activity));
+export function CAPACITY(names: any[][], amounts: any[][], delta_pH: any[][], temperature?: any[][], activity?: any[][]): any[][] {
+  return rowwise(capacity, names, amounts, delta_pH, temperature, activity);
 }
 
 /**
@@ -109,10 +114,10 @@ export function CAPACITY(names: any[][], amounts: any[][], delta_pH: any, temper
  * @param [species] A species name (e.g. "HPO4^2-" or "H+"): returns its concentration, mol/L. Omit for the whole table.
  * @param [temperature] Temperature, °C (0–100). Default 25.
  * @param [activity] Activity model: "davies" (default), "ideal" or "debye-huckel".
- * @returns A species' concentration (mol/L), or a table with a header row: species, charge, mol/L, fraction.
+ * @returns A species' concentration (mol/L), or a table with a header row: species, charge, mol/L, fraction. Row-wise: names as one row and amounts with one row per mixture give one result per row (a spilled column).
  */
-export function SPECIES(names: any[][], amounts: any[][], species?: string, temperature?: any, activity?: string): any[][] {
-  return guard(() => speciesTable(names, amounts, species, temperature, activity));
+export function SPECIES(names: any[][], amounts: any[][], species?: any[][], temperature?: any[][], activity?: any[][]): any[][] {
+  return rowwise(speciesTable, names, amounts, species, temperature, activity);
 }
 
 /**
@@ -123,10 +128,10 @@ export function SPECIES(names: any[][], amounts: any[][], species?: string, temp
  * @param amounts Concentrations, mol/L (or unit text), same shape as names.
  * @param [temperature] Temperature, °C (0–100). Default 25.
  * @param [activity] Activity model: "davies" (default), "ideal" or "debye-huckel".
- * @returns One line of text starting with "OK" or "CHECK".
+ * @returns One line of text starting with "OK" or "CHECK". Row-wise: names as one row and amounts with one row per mixture give one result per row (a spilled column).
  */
-export function CHECK(names: any[][], amounts: any[][], temperature?: any, activity?: string): string {
-  return guard(() => check(names, amounts, temperature, activity));
+export function CHECK(names: any[][], amounts: any[][], temperature?: any[][], activity?: any[][]): any[][] {
+  return rowwise(check, names, amounts, temperature, activity);
 }
 
 /**
@@ -136,10 +141,10 @@ export function CHECK(names: any[][], amounts: any[][], temperature?: any, activ
  * @param names Substance names.
  * @param amounts Concentrations, mol/L (or unit text), same shape as names.
  * @param [temperature] Temperature, °C (0–100). Default 25.
- * @returns Ionic strength, mol/L.
+ * @returns Ionic strength, mol/L. Row-wise: names as one row and amounts with one row per mixture give one result per row (a spilled column).
  */
-export function IONIC(names: any[][], amounts: any[][], temperature?: any): number {
-  return guard(() => ionic(names, amounts, temperature));
+export function IONIC(names: any[][], amounts: any[][], temperature?: any[][]): any[][] {
+  return rowwise(ionic, names, amounts, temperature);
 }
 
 /**
@@ -149,10 +154,10 @@ export function IONIC(names: any[][], amounts: any[][], temperature?: any): numb
  * @param names Substance names (non-electrolytes such as sucrose count too).
  * @param amounts Concentrations, mol/L (or unit text), same shape as names.
  * @param [temperature] Temperature, °C (0–100). Default 25.
- * @returns Ideal osmolarity, osmol/L.
+ * @returns Ideal osmolarity, osmol/L. Row-wise: names as one row and amounts with one row per mixture give one result per row (a spilled column).
  */
-export function OSMOLARITY(names: any[][], amounts: any[][], temperature?: any): number {
-  return guard(() => osmolarity(names, amounts, temperature));
+export function OSMOLARITY(names: any[][], amounts: any[][], temperature?: any[][]): any[][] {
+  return rowwise(osmolarity, names, amounts, temperature);
 }
 
 /**

@@ -45,7 +45,7 @@ describe("custom functions metadata", () => {
     const fn = functions.find((f) => f.id === id) as Fn;
     const entry = CATALOGUE.find((c) => c.id === id)!;
     expect(fn.parameters.map((p) => ({ name: p.name, optional: p.optional === true }))).toEqual(entry.params);
-    expect(fn.result.dimensionality === "matrix" ? "matrix" : "scalar").toBe(entry.result);
+    expect(fn.result.dimensionality === "matrix" ? "matrix" : "scalar").toBe(entry.result === "column" ? "matrix" : entry.result);
     expect(entry.fn.length).toBe(entry.params.length);
   });
 

@@ -4,7 +4,7 @@
  * copy. Every function is called here with deeply frozen ranges (modules are strict mode, so any
  * write would throw a TypeError), with inputs that succeed and inputs that fail.
  */
-import * as AQ from "../../src/functions/functions";
+import { AQ } from "../support/aq-values";
 
 function frozen<T>(value: T): T {
   if (Array.isArray(value)) {

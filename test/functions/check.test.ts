@@ -41,7 +41,7 @@ describe("AQ.CHECK", () => {
   });
 
   test("bad input is still #VALUE! with a message", () => {
-    const r = evaluateFormula('=AQ.CHECK({"acetic acid"},{0.05;0.05})');
+    const r = evaluateFormula('=AQ.CHECK({"acetic acid";"sodium acetate"},{0.05})');
     expect(r.error).toBe("#VALUE!");
     expect(r.message).toMatch(/2×1/);
   });

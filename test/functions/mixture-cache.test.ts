@@ -4,7 +4,7 @@
  * library is never answered from a cache; the key tells apart inputs that JSON text would not.
  */
 import { prepare, solveEquilibrium } from "../../src/chem";
-import * as AQ from "../../src/functions/functions";
+import { AQ } from "../support/aq-values";
 import { clearMixtureCache, MIXTURE_CACHE_LIMIT, mixtureKey, readEntries, readMixture } from "../../src/functions/mixture";
 import { BUILTIN_LIBRARY } from "../../src/library/builtin";
 import { resetActiveLibrary, setLayer } from "../../src/library";

@@ -9,7 +9,7 @@
  * that cannot be read leaves the functions on the layers below, reports the problem, and keeps the
  * stored text.
  */
-import * as AQ from "../../src/functions/functions";
+import { AQ } from "../support/aq-values";
 import {
   BUILTIN_LIBRARY,
   createLibrary,

@@ -6,7 +6,7 @@ import { join } from "node:path";
 import { parseQuantity } from "../../src/chem";
 import { goldenMax } from "../../src/chem/workflows/golden";
 import { finite } from "../../src/functions/errors";
-import * as AQ from "../../src/functions/functions";
+import { AQ } from "../support/aq-values";
 import { resetActiveLibrary } from "../../src/library";
 import { outcomeOf, outcomeProblem } from "./outcome";
 
