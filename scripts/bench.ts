@@ -403,6 +403,9 @@ function newestSource(dir: string): number {
   return newest;
 }
 
+/** Budget for dist/functions.js, minified (mathjs units included: they are about 230 kB of it). */
+const FUNCTIONS_BUDGET_KB = 450;
+
 function kB(bytes: number): string {
   return `${(bytes / 1000).toFixed(1)} kB`;
 }
@@ -437,7 +440,7 @@ function partD(): void {
   table(["bundle", "minified", "bytes", "gzip", "bytes"], rows);
   if (stale) console.log("    NOTE: a file in src/ changed after dist/ was built: these sizes may be stale");
   const functionsKB = statSync(join(dist, "functions.js")).size / 1000;
-  console.log(`    target: functions bundle ≤ 300 kB minified: ${functionsKB <= 300 ? "met" : "NOT met"} (${functionsKB.toFixed(1)} kB)`);
+  console.log(`    target: functions bundle ≤ ${FUNCTIONS_BUDGET_KB} kB minified: ${functionsKB <= FUNCTIONS_BUDGET_KB ? "met" : "NOT met"} (${functionsKB.toFixed(1)} kB)`);
 }
 
 // ---- (e) batching ----------------------------------------------------------------------------

@@ -123,6 +123,13 @@ describe("parseQuantity explains what is wrong", () => {
     { text: "0.9 % w/v", dim: "concentration", says: /molar mass/ },
     { text: "0.9 % w/v", dim: "volume", says: /not a volume/ },
     { text: "K", dim: "temperature", says: /no number/ },
+    // Units mathjs knows that a recipe does not use, and prefixes above kilo (a mistyped case).
+    { text: "5 gal", dim: "volume", says: /"gal" is not one of the units read here \(mol, g, L/ },
+    { text: "5 Mmol", dim: "amount", says: /"Mmol" is not one of the units read here.*did you mean "mmol"/ },
+    { text: "5 ML", dim: "volume", says: /did you mean "mL"/ },
+    { text: "2 osmol/L", dim: "concentration", says: /osmol\/L, which is not a concentration/ },
+    { text: "5 µfoo", dim: "concentration", says: /unknown unit "µfoo"/ },
+    { text: "-2 mmol", dim: "amount", says: /An amount cannot be negative/ },
     ] as const)("$text as $dim", ({ text, dim, says }) => {
     const r = parseQuantity(text, dim);
     expect(r.ok).toBe(false);
