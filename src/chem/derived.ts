@@ -4,7 +4,7 @@
 import { activityShape } from "./activity/model";
 import { isActivityModel, unknownActivityModelMessage } from "./activity/models";
 import { debyeHuckelA } from "./activity/debye-huckel-a";
-import { solveEquilibrium } from "./equilibrium";
+import { solveEquilibrium } from "./solve-mixture";
 import { fail, fmt } from "./failure";
 import { thermodynamicPKa } from "./temperature";
 import type { AcidBaseSystem, ActivityModel, ChemOptions, Mixture, ValueResult } from "./types";

@@ -21,7 +21,7 @@ export type {
   PHResult,
 } from "./types";
 export { DEFAULTS, SOLVER, LIMITS } from "./defaults";
-export { solveEquilibrium, solvePH } from "./equilibrium";
+export { solveEquilibrium, solvePH } from "./solve-mixture";
 export { prepare, PreparedMixture } from "./prepared";
 export { pKw, kw, pKwMarshallFranck, pKwIapws2006 } from "./water";
 export { waterDensity } from "./water-density";

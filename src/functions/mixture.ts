@@ -16,7 +16,7 @@ import { cellsOf, isBlank, position, quantity, shapeOf, text, type Cell } from "
 import { badInput, orThrow } from "./errors";
 import { libraryScoped, resolveComponent } from "./substances";
 
-export interface ReadMixture {
+export interface MixtureArgs {
   mixture: Mixture;
   prepared: PreparedMixture;
 }
@@ -27,7 +27,7 @@ export interface ReadMixture {
  * garbage collector keep thousands of prepared mixtures alive (measured: scripts/bench.ts part b).
  */
 export const MIXTURE_CACHE_LIMIT = 256;
-const mixtureCache = libraryScoped(() => new Map<string, ReadMixture>());
+const mixtureCache = libraryScoped(() => new Map<string, MixtureArgs>());
 
 /**
  * One cell in the key: a type tag, then the value — numbers ended by ";", strings length-prefixed —
@@ -141,13 +141,13 @@ export function readEntries(names: Cell, amounts: Cell): { component: Component;
   return entries;
 }
 
-function read(names: Cell, amounts: Cell): ReadMixture {
+function read(names: Cell, amounts: Cell): MixtureArgs {
   const mixture = readEntries(names, amounts);
   return { mixture, prepared: orThrow(prepare(mixture)) };
 }
 
 /** The mixture of a names/amounts pair, validated and prepared for solving (cached). */
-export function readMixture(names: Cell, amounts: Cell): ReadMixture {
+export function readMixtureArgs(names: Cell, amounts: Cell): MixtureArgs {
   const key = mixtureKey(names, amounts);
   if (key === null) return read(names, amounts);
   const cache = mixtureCache();

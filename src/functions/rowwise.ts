@@ -20,7 +20,7 @@
  */
 import { isBlank, shapeOf, text, type Cell } from "./args";
 import { badInput, guard, toCustomFunctionsError } from "./errors";
-import { readMixture } from "./mixture";
+import { readMixtureArgs } from "./mixture";
 import { resolveComponent } from "./substances";
 
 /** The implementation of a function that gives one value: names, amounts, then its other arguments. */
@@ -118,7 +118,7 @@ export function rowwise(impl: RowImplementation, names: Cell, amounts: Cell, ...
       return single(value, i, n) as never; // throws: a block or a column of another length
     });
     // One mixture for every row: its errors are the formula's. A table of mixtures: its names are.
-    if (amountRows === null) readMixture(names, amounts);
+    if (amountRows === null) readMixtureArgs(names, amounts);
     else checkNames(names);
     const fixed = rest.map((v, i) => (columns[i] === null ? single(v, i) : undefined));
     const out: unknown[][] = [];

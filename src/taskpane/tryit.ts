@@ -42,10 +42,10 @@ export const REGIME_TEXT: Record<Regime, string> = {
 
 export type UsedEntry = { row: number; id: string; name: string; layer: LayerName; overrides: LayerName[] };
 
-export type ReadMixtureResult = { ok: true; mix: Mixture; temperatureC: number; used: UsedEntry[] } | { ok: false; issues: TryIssue[] };
+export type PaneMixtureResult = { ok: true; mix: Mixture; temperatureC: number; used: UsedEntry[] } | { ok: false; issues: TryIssue[] };
 
 /** Rows and temperature text → the engine's mixture through the library in effect (no solving). */
-export function readMixture(library: Library, rows: readonly TryRow[], temperatureText: string): ReadMixtureResult {
+export function parsePaneMixture(library: Library, rows: readonly TryRow[], temperatureText: string): PaneMixtureResult {
   const issues: TryIssue[] = [];
   const mix: Mixture = [];
   const used: UsedEntry[] = [];
@@ -74,7 +74,7 @@ export function readMixture(library: Library, rows: readonly TryRow[], temperatu
 }
 
 export function tryMixture(library: Library, rows: readonly TryRow[], temperatureText: string, activity: ActivityModel = DEFAULTS.activity): TryResult {
-  const m = readMixture(library, rows, temperatureText);
+  const m = parsePaneMixture(library, rows, temperatureText);
   if (!m.ok) return m;
   const { mix, temperatureC, used } = m;
   const r = solveEquilibrium(mix, { temperatureC, activity });

@@ -5,7 +5,7 @@
  */
 import { prepare, solveEquilibrium } from "../../src/chem";
 import { AQ } from "../support/aq-values";
-import { clearMixtureCache, MIXTURE_CACHE_LIMIT, mixtureKey, readEntries, readMixture } from "../../src/functions/mixture";
+import { clearMixtureCache, MIXTURE_CACHE_LIMIT, mixtureKey, readEntries, readMixtureArgs } from "../../src/functions/mixture";
 import { BUILTIN_LIBRARY } from "../../src/library/builtin";
 import { resetActiveLibrary, setLayer } from "../../src/library";
 import type { LibraryDoc, SystemRecord } from "../../src/library/types";
@@ -64,10 +64,10 @@ describe("cached and uncached results are identical", () => {
   });
 
   test("a hit returns the very same prepared mixture; a different amount does not", () => {
-    const a = readMixture(ACETATE, [[0.05, 0.05]]);
-    expect(readMixture(ACETATE, [[0.05, 0.05]])).toBe(a);
-    expect(readMixture([["acetic acid", "sodium acetate"]], [[0.05, 0.05]])).toBe(a); // equal content, new arrays
-    expect(readMixture(ACETATE, [[0.05, 0.050000000000000010]])).not.toBe(a);
+    const a = readMixtureArgs(ACETATE, [[0.05, 0.05]]);
+    expect(readMixtureArgs(ACETATE, [[0.05, 0.05]])).toBe(a);
+    expect(readMixtureArgs([["acetic acid", "sodium acetate"]], [[0.05, 0.05]])).toBe(a); // equal content, new arrays
+    expect(readMixtureArgs(ACETATE, [[0.05, 0.050000000000000010]])).not.toBe(a);
   });
 
   test("more distinct mixtures than the cache holds: every answer still equals a fresh solve", () => {

@@ -14,7 +14,7 @@ import { renderSpeciation, visibleRun } from "../../src/taskpane/charts/speciati
 import { SVG_NS } from "../../src/taskpane/charts/svg";
 import { niceCeil, niceStep, tickLabels, ticks } from "../../src/taskpane/charts/ticks";
 import { titratableAmounts, titration, type TitrationData } from "../../src/taskpane/charts/titration";
-import { readMixture, type TryRow } from "../../src/taskpane/tryit";
+import { parsePaneMixture, type TryRow } from "../../src/taskpane/tryit";
 import { fake, fakeDocument, type FakeElement } from "./support/fake-svg-dom";
 
 const PHOSPHATE: TryRow[] = [
@@ -23,7 +23,7 @@ const PHOSPHATE: TryRow[] = [
 ];
 
 function mix(rows: TryRow[], temperature = "25") {
-  const m = readMixture(getActiveLibrary(), rows, temperature);
+  const m = parsePaneMixture(getActiveLibrary(), rows, temperature);
   if (!m.ok) throw new Error(JSON.stringify(m.issues));
   return m;
 }

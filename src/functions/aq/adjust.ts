@@ -8,7 +8,7 @@
 import { adjust as adjustMixture } from "../../chem/workflows";
 import { isBlank, plainNumber, quantity, text, type Cell } from "../args";
 import { badInput, finite, orThrow } from "../errors";
-import { readMixture } from "../mixture";
+import { readMixtureArgs } from "../mixture";
 import { resolveComponent } from "../substances";
 import { chemOptions } from "./options";
 import { trustIonicStrength } from "./trust";
@@ -24,7 +24,7 @@ export function adjust(
   activity: Cell,
   measuredPH?: Cell,
 ): number {
-  const { mixture } = readMixture(names, amounts);
+  const { mixture } = readMixtureArgs(names, amounts);
   const target = plainNumber(targetPH, "target_pH");
   const component = resolveComponent(text(titrant, "titrant"));
   const options = { ...chemOptions(temperature, activity), ...(isBlank(measuredPH) ? {} : { measuredPH: plainNumber(measuredPH, "measured_pH") }) };

@@ -1,7 +1,7 @@
 /** AQ.BETA: buffer value β, mol/(L·pH), at the mixture's own pH. */
 import type { Cell } from "../args";
 import { finite } from "../errors";
-import { equilibriumOf } from "./equilibrium";
+import { equilibriumOf } from "./equilibrium-of-args";
 import { trustIonicStrength } from "./trust";
 
 export function beta(names: Cell, amounts: Cell, temperature: Cell, activity: Cell): number {

@@ -5,12 +5,12 @@
 import { capacity as capacityOf } from "../../chem/workflows";
 import { plainNumber, type Cell } from "../args";
 import { finite, orThrow } from "../errors";
-import { readMixture } from "../mixture";
+import { readMixtureArgs } from "../mixture";
 import { chemOptions } from "./options";
 import { trustIonicStrength } from "./trust";
 
 export function capacity(names: Cell, amounts: Cell, deltaPH: Cell, temperature: Cell, activity: Cell): number {
-  const { mixture } = readMixture(names, amounts);
+  const { mixture } = readMixtureArgs(names, amounts);
   const delta = plainNumber(deltaPH, "delta_pH");
   return finite(trustIonicStrength(orThrow(capacityOf(mixture, delta, chemOptions(temperature, activity))), "the capacity").value, "capacity");
 }

@@ -8,7 +8,7 @@
  */
 import type { Equilibrium } from "../../chem/types";
 import type { Cell } from "../args";
-import { equilibriumOf } from "./equilibrium";
+import { equilibriumOf } from "./equilibrium-of-args";
 
 const REGIME_TEXT: Record<Equilibrium["regime"], string> = {
   buffer: "buffer",

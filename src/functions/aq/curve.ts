@@ -10,7 +10,7 @@
 import { curve as curveOf } from "../../chem/workflows";
 import { plainNumber, quantity, text, type Cell } from "../args";
 import { finite, orThrow } from "../errors";
-import { readMixture } from "../mixture";
+import { readMixtureArgs } from "../mixture";
 import { resolveComponent } from "../substances";
 import { chemOptions } from "./options";
 
@@ -26,7 +26,7 @@ export function curve(
   points: Cell,
   temperature: Cell,
 ): unknown[][] {
-  const { mixture } = readMixture(names, amounts);
+  const { mixture } = readMixtureArgs(names, amounts);
   const component = resolveComponent(text(titrant, "titrant"));
   const stockConc = quantity(titrantConc, "titrant_conc", "concentration", { molarMass: component.molarMass });
   const initial = quantity(volume, "volume", "volume");

@@ -5,10 +5,10 @@
 import { osmolarity as idealOsmolarity } from "../../chem";
 import type { Cell } from "../args";
 import { finite, orThrow } from "../errors";
-import { readMixture } from "../mixture";
+import { readMixtureArgs } from "../mixture";
 import { chemOptions } from "./options";
 
 export function osmolarity(names: Cell, amounts: Cell, temperature: Cell): number {
-  const { mixture } = readMixture(names, amounts);
+  const { mixture } = readMixtureArgs(names, amounts);
   return finite(orThrow(idealOsmolarity(mixture, chemOptions(temperature))).value, "osmolarity");
 }

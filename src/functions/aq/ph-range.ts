@@ -10,7 +10,7 @@
 import { phRange as phRangeOf, PHRANGE_MAX_EXHAUSTIVE, type PHRangeValue } from "../../chem/workflows";
 import { cellsOf, isBlank, plainNumber, position, shapeOf, type Cell } from "../args";
 import { badInput, finite, orThrow } from "../errors";
-import { readMixture } from "../mixture";
+import { readMixtureArgs } from "../mixture";
 import { chemOptions } from "./options";
 
 export const PHRANGE_HEADER = ["low pH", "high pH", "method"];
@@ -23,7 +23,7 @@ function relative(value: Cell, what: string): number {
   return plainNumber(value, what);
 }
 
-/** One tolerance per mixture entry, aligned with readMixture's entries (blank names skipped). */
+/** One tolerance per mixture entry, aligned with readMixtureArgs's entries (blank names skipped). */
 function tolerances(names: Cell, amountTolerance: Cell): number | number[] {
   const tShape = shapeOf(amountTolerance);
   if (tShape[0] === 1 && tShape[1] === 1) return relative(cellsOf(amountTolerance)[0].value, "amount_tolerance");
@@ -48,7 +48,7 @@ function methodText(r: PHRangeValue): string {
 }
 
 export function phRange(names: Cell, amounts: Cell, amountTolerance: Cell, pKaUncertainty: Cell, temperature: Cell): unknown[][] {
-  const { mixture } = readMixture(names, amounts);
+  const { mixture } = readMixtureArgs(names, amounts);
   const tol = tolerances(names, amountTolerance);
   const u = plainNumber(pKaUncertainty, "pKa_uncertainty", 0);
   const r = orThrow(phRangeOf(mixture, tol, { ...chemOptions(temperature), pKaUncertainty: u }));

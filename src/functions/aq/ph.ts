@@ -1,12 +1,12 @@
 /** AQ.PH: pH (−log10 a(H⁺)) of a mixture. */
 import type { Cell } from "../args";
 import { finite, orThrow } from "../errors";
-import { readMixture } from "../mixture";
+import { readMixtureArgs } from "../mixture";
 import { chemOptions } from "./options";
 import { trustIonicStrength } from "./trust";
 
 export function ph(names: Cell, amounts: Cell, temperature: Cell, activity: Cell): number {
-  const { prepared } = readMixture(names, amounts);
+  const { prepared } = readMixtureArgs(names, amounts);
   const result = trustIonicStrength(orThrow(prepared.solvePH(chemOptions(temperature, activity))), "pH");
   return finite(result.pH, "pH");
 }

@@ -5,7 +5,7 @@
 import type { Species } from "../../chem/types";
 import { isBlank, text, type Cell } from "../args";
 import { finite, notAvailable } from "../errors";
-import { equilibriumOf } from "./equilibrium";
+import { equilibriumOf } from "./equilibrium-of-args";
 import { trustIonicStrength } from "./trust";
 
 export const SPECIES_HEADER = ["species", "charge", "mol/L", "fraction"];

@@ -6,7 +6,7 @@
 import { parseQuantity, STRONG_ACID, STRONG_BASE } from "../../chem";
 import type { ActivityModel, Component } from "../../chem";
 import type { Library } from "../../library";
-import { readMixture, type TryRow, type UsedEntry } from "../tryit";
+import { parsePaneMixture, type TryRow, type UsedEntry } from "../tryit";
 import { speciation, type SpeciationData } from "./speciation";
 import { titration, TITRATION_DEFAULTS, type TitrantName, type TitrationData } from "./titration";
 
@@ -60,7 +60,7 @@ function positive(text: string | undefined, fallback: number, what: string, dime
 }
 
 export function pictureOf(library: Library, req: PictureRequest): Picture {
-  const m = readMixture(library, req.rows, req.temperature);
+  const m = parsePaneMixture(library, req.rows, req.temperature);
   if (!m.ok) return { ok: false, issues: m.issues.map((i) => (i.row >= 0 ? `row ${i.row + 1} (${i.field}): ${i.message}` : i.message)) };
   const sp = speciation(m.mix, { temperatureC: m.temperatureC, activity: req.activity });
   if (!sp.ok) return { ok: false, issues: [sp.message] };

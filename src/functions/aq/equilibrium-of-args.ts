@@ -2,10 +2,10 @@
 import type { Equilibrium } from "../../chem/types";
 import type { Cell } from "../args";
 import { orThrow } from "../errors";
-import { readMixture } from "../mixture";
+import { readMixtureArgs } from "../mixture";
 import { chemOptions } from "./options";
 
 export function equilibriumOf(names: Cell, amounts: Cell, temperature: Cell, activity?: Cell): Equilibrium {
-  const { prepared } = readMixture(names, amounts);
+  const { prepared } = readMixtureArgs(names, amounts);
   return orThrow(prepared.solve(chemOptions(temperature, activity))) as Equilibrium;
 }
