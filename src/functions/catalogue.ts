@@ -1,9 +1,12 @@
 /**
  * The AQ functions for hosts other than Excel (HyperFormula in src/cli): the same function objects,
- * with the parameter list and result shape that Excel reads from the JSDoc metadata. A test checks
- * that this list and the generated functions.json agree.
+ * with the parameter list and result shape that Excel reads from the JSDoc metadata. The list itself
+ * is generated from that JSDoc (catalogue-signatures.ts, by scripts/make-catalogue.mjs), so the
+ * function list has one source; this file only joins each signature to its function object and says
+ * which table results are row-wise columns.
  */
 import * as AQ from "./functions";
+import { SIGNATURES } from "./catalogue-signatures";
 
 export interface CatalogueEntry {
   /** Id after the namespace: AQ.<id>. */
@@ -18,42 +21,17 @@ export interface CatalogueEntry {
   result: "scalar" | "matrix" | "column";
 }
 
-const req = (name: string) => ({ name, optional: false });
-const opt = (name: string) => ({ name, optional: true });
+/**
+ * Functions that give one value per row of a row-wise table (./rowwise): the headless engine sizes
+ * their result from the arguments' shapes. Every other table result is sized by computing it.
+ */
+const ROW_WISE: ReadonlySet<string> = new Set(["PH", "ADJUST", "BETA", "CAPACITY", "CHECK", "IONIC", "OSMOLARITY", "OSMOLALITY"]);
 
-export const CATALOGUE: readonly CatalogueEntry[] = [
-  { id: "PH", fn: AQ.PH, params: [req("names"), req("amounts"), opt("temperature"), opt("activity")], result: "column" },
-  {
-    id: "ADJUST",
-    fn: AQ.ADJUST,
-    params: [req("names"), req("amounts"), req("target_pH"), req("titrant"), opt("titrant_conc"), opt("volume"), opt("temperature"), opt("activity"), opt("measured_pH")],
-    result: "column",
-  },
-  { id: "BETA", fn: AQ.BETA, params: [req("names"), req("amounts"), opt("temperature"), opt("activity")], result: "column" },
-  { id: "CAPACITY", fn: AQ.CAPACITY, params: [req("names"), req("amounts"), req("delta_pH"), opt("temperature"), opt("activity")], result: "column" },
-  { id: "SPECIES", fn: AQ.SPECIES, params: [req("names"), req("amounts"), opt("species"), opt("temperature"), opt("activity")], result: "matrix" },
-  { id: "CHECK", fn: AQ.CHECK, params: [req("names"), req("amounts"), opt("temperature"), opt("activity")], result: "column" },
-  { id: "IONIC", fn: AQ.IONIC, params: [req("names"), req("amounts"), opt("temperature")], result: "column" },
-  { id: "OSMOLARITY", fn: AQ.OSMOLARITY, params: [req("names"), req("amounts"), opt("temperature")], result: "column" },
-  { id: "PKA", fn: AQ.PKA, params: [req("substance"), opt("step"), opt("temperature"), opt("ionic_strength")], result: "scalar" },
-  { id: "MOLARMASS", fn: AQ.MOLARMASS, params: [req("substance")], result: "scalar" },
-  {
-    id: "RECIPE",
-    fn: AQ.RECIPE,
-    params: [req("acid_form"), req("base_form"), req("target_pH"), req("total_conc"), req("volume"), opt("temperature"), opt("ionic_strength"), opt("salt"), opt("activity"), opt("other_names"), opt("other_amounts")],
-    result: "matrix",
-  },
-  {
-    id: "CURVE",
-    fn: AQ.CURVE,
-    params: [req("names"), req("amounts"), req("titrant"), req("titrant_conc"), req("volume"), req("max_titrant_volume"), opt("points"), opt("temperature")],
-    result: "matrix",
-  },
-  {
-    id: "PHRANGE",
-    fn: AQ.PHRANGE,
-    params: [req("names"), req("amounts"), req("amount_tolerance"), opt("pKa_uncertainty"), opt("temperature")],
-    result: "matrix",
-  },
-  { id: "CONSTANTS_ID", fn: AQ.CONSTANTS_ID, params: [], result: "scalar" },
-];
+const functionsByName = AQ as unknown as Record<string, ((...args: any[]) => unknown) | undefined>;
+
+export const CATALOGUE: readonly CatalogueEntry[] = SIGNATURES.map((s) => {
+  const fn = functionsByName[s.functionName];
+  if (typeof fn !== "function") throw new Error(`catalogue: functions.ts exports no function ${s.functionName} for AQ.${s.id}; run \`npm run catalogue\`.`);
+  const result = !s.table ? "scalar" : ROW_WISE.has(s.id) ? "column" : "matrix";
+  return { id: s.id, fn, params: s.params.map((p) => ({ name: p.name, optional: p.optional })), result };
+});
