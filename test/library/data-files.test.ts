@@ -95,20 +95,50 @@ describe("provenance of every built-in number", () => {
   });
 });
 
-describe("values cross-checked in the project's reference list (Goldberg, Kishore & Lennen 2002)", () => {
+describe("values as read in their published sources (the source and place are in the data; REFERENCES §3)", () => {
   const sys = (id: string) => (BUILTIN_LIBRARY.systems ?? []).find((s) => s.id === id)!;
   test.each([
-    ["acetate", 0, 4.756, -0.41, -142],
-    ["phosphate", 1, 7.198, 3.6, -230],
-    ["citrate", 2, 6.396, -3.38, -254],
-    ["tris", 0, 8.072, 47.45, -59],
-    ["hepes", 0, 7.564, 20.4, 47],
-    ["ammonia", 0, 9.245, 51.95, 8],
-    ["glycine", 1, 9.78, 44.2, -57],
-  ])("%s step %i: pK %d, ΔrH° %d kJ/mol, ΔrCp° %d J/(K·mol)", (id, i, pKa, dH, dCp) => {
+    // id, step, pK, ΔrH° (kJ/mol), ΔrCp° (J/(K·mol)), source id
+    ["citrate", 2, 6.397, -3.6, -231, "citric-nacl-1997"], // abstract: log K3 = −6.397, ΔH = −3.6, ΔCp = −231
+    ["borate", 0, 9.235, 14.11, -193, "manov-1944-borate"], // from pK = 2237.94/T + 0.016883·T − 3.305
+    ["tris", 0, 8.071, 47.53, -67, "tris-nacl-1987"], // protonation ΔH° = −47.53, ΔCp° = 67
+    ["bis-tris", 0, 6.4828, 28.273, 36, "roy-2014-bistris"],
+    ["succinate", 1, 5.638, -0.5, -215, "kettler-1995-succinic"],
+    ["formate", 0, 3.755, -0.09, -147, "bell-1993-formic"],
+    ["ches", 0, 9.394, 39.55, 9.5, "roy-1997-aces-ches"], // from pK2 = 1917.66/T + 5.7940 − 0.4971·ln T
+    ["aces", 0, 6.847, 30.43, -61.6, "roy-1997-aces-ches"], // from pK2 = 2548.60/T − 20.03159 + 3.2172·ln T
+    ["triethanolamine", 0, 7.762, 33.45, 52, "bates-allen-1960"],
+  ])("%s step %i: pK %d, ΔrH° %d kJ/mol, ΔrCp° %d J/(K·mol) (%s)", (id, i, pKa, dH, dCp, source) => {
     const step = sys(id).steps[i];
     expect([step.pKa.value, step.dH?.value, step.dCp?.value]).toEqual([pKa, dH, dCp]);
-    expect(step.pKa.source).toBe("goldberg2002");
+    expect([step.pKa, step.dH, step.dCp].map((r) => [r?.source, r?.status])).toEqual([
+      [source, "published"],
+      [source, "published"],
+      [source, "published"],
+    ]);
+  });
+
+  test.each([
+    ["phosphate", 1, 7.1965, "partanen-1996-phosphate"], // K2 = 6.360·10⁻⁸
+    ["hepes", 0, 7.565, "vega-bates-1976"],
+    ["mes", 0, 6.27, "vega-bates-1976"],
+    ["tes", 0, 7.55, "vega-bates-1976"],
+    ["mops", 0, 7.184, "roy-mops"],
+    ["bicine", 0, 8.333, "roy-2006-bicine"],
+    ["benzoate", 0, 4.21, "nbs-benzoic-ethanol"],
+  ])("%s step %i: pK %d (%s)", (id, i, pKa, source) => {
+    const r = sys(id).steps[i].pKa;
+    expect([r.value, r.source, r.status]).toEqual([pKa, source, "published"]);
+  });
+
+  test("calorimetric ΔrH° of HEPES (20.8 kJ/mol) and MOPS (20.7 kJ/mol) in water", () => {
+    expect([sys("hepes").steps[0].dH?.value, sys("hepes").steps[0].dH?.source]).toEqual([20.8, "thermochim-2006-hepes"]);
+    expect([sys("mops").steps[0].dH?.value, sys("mops").steps[0].dH?.source]).toEqual([20.7, "thermochim-2011-mops"]);
+  });
+
+  test("a value recalled from a source that could not be read names it but stays unverified", () => {
+    const r = sys("acetate").steps[0].pKa;
+    expect([r.value, r.source, r.status]).toEqual([4.756, "goldberg2002", "unverified"]);
   });
 
   test("charges of the fully protonated forms", () => {

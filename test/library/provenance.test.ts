@@ -6,9 +6,15 @@ const sources = BUILTIN_LIBRARY.sources!;
 const lookup = (id: string) => sources[id];
 const step = (id: string, i: number) => BUILTIN_LIBRARY.systems!.find((s) => s.id === id)!.steps[i];
 
-test("a published value names authors, journal, year and the entry", () => {
+test("a published value names authors, title, journal, year, DOI and the place in the source", () => {
+  expect(describeProvenance(step("bis-tris", 0).pKa, lookup)).toBe(
+    "R. N. Roy, L. N. Roy, K. Hundley, J. Dinga, M. Medcalf, L. Tebbe, R. Parmar, J. Veliz, Acid dissociation constants and related thermodynamic functions of protonated 2,2-bis(hydroxymethyl)-2,2',2''-nitrilotriethanol (BIS-TRIS) from (278.15 to 328.15) K. Journal of Biophysical Chemistry, 5, 118–124 (2014), doi:10.4236/jbpc.2014.53013 — abstract: values at 298.15 K, pKa = 6.4828",
+  );
+});
+
+test("an unverified value that names the source it was recalled from says both", () => {
   expect(describeProvenance(step("acetate", 0).pKa, lookup)).toBe(
-    "R. N. Goldberg, N. Kishore, R. M. Lennen, Thermodynamic quantities for the ionization reactions of buffers. Journal of Physical and Chemical Reference Data, 31, 231 (2002) — entry: acetic acid (cross-checked against an independent compilation; not read in the original paper)",
+    "from memory, unverified: as recalled from Goldberg et al. (2002), whose entry could not be read here [R. N. Goldberg, N. Kishore, R. M. Lennen, Thermodynamic quantities for the ionization reactions of buffers. Journal of Physical and Chemical Reference Data, 31, 231 (2002) — entry: acetic acid]",
   );
 });
 
