@@ -1,6 +1,7 @@
 /** The validation report for QA, as Markdown and as a standalone HTML page. */
 import { marked } from "marked";
 import type { ValidationCase } from "./cases";
+import { constantsStatusMarkdown } from "./constants-status";
 import type { CaseResult, ValidationRun } from "./run";
 
 export interface ReportContext {
@@ -115,6 +116,12 @@ export function reportMarkdown(run: ValidationRun, ctx: ReportContext): string {
     `| Node.js | ${ctx.node} |`,
     `| platform | ${ctx.platform} |`,
     `| date | ${ctx.date} |`,
+    "",
+    "## Status of the built-in constants",
+    "",
+    "How many built-in values were read in the source they cite, are common practice, or are recalled from memory (scripts/validation/constants-status.ts):",
+    "",
+    ...constantsStatusMarkdown(),
     "",
     "## How the checks are run",
     "",
