@@ -264,7 +264,7 @@ export function PHRANGE(names: any[][], amounts: any[][], amount_tolerance: any,
  * A short fingerprint and version of the constants in effect, to print on a release sheet: two sheets showing the same id used the same data.
  * @customfunction CONSTANTS_ID
  * @helpurl https://localhost:3000/help/constants_id.html
- * @returns Fingerprint text, e.g. "PL-1.0.0-3fa9c21b".
+ * @returns Fingerprint text, e.g. "PL-1.0.0-3fa9c21b07" (10 hexadecimal digits of a SHA-256 hash).
  */
 export function CONSTANTS_ID(): string {
   return guard(() => constantsId());
