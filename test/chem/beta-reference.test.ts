@@ -1,16 +1,11 @@
 /**
- * Buffer value β of standards against Lange's Handbook of Chemistry, 15th ed., Table 8.15 (V),
- * and the ideal-solution identity.
- *
- * Tolerance 0.0015 mol/(L·pH): the table prints β to 0.001 (±0.0005 rounding) and does not state
- * its activity treatment; for these solutions the activity correction itself moves β by 0.002–0.003
- * (Davies vs ideal), so another 0.001 is allowed for the convention. β here is dC(NaOH)/dpH with
- * pH = −log a(H⁺), Davies, 25 °C.
+ * Buffer value β of standards against Lange's Handbook of Chemistry, 15th ed., Table 8.15 (values,
+ * tolerance and its reason: test/reference/lange-beta.json; the source: docs/references.md), and the
+ * ideal-solution identity. β here is dC(NaOH)/dpH with pH = −log a(H⁺), Davies, 25 °C.
  */
 import { solveEquilibrium, kw, type Mixture } from "../../src/chem";
+import { casesOf } from "../reference";
 import * as f from "./fixtures";
-
-const TOL = 0.0015;
 
 function betaOf(mix: Mixture, activity: "davies" | "ideal" = "davies") {
   const r = solveEquilibrium(mix, { temperatureC: 25, activity });
@@ -18,26 +13,10 @@ function betaOf(mix: Mixture, activity: "davies" | "ideal" = "davies") {
   return r;
 }
 
-describe("β of standards vs Lange's Table 8.15", () => {
-  test("KH phthalate 0.05 M: 0.016", () => {
-    f.expectAbs(betaOf(f.mixture([f.KHphthalate, 0.05])).beta, 0.016, TOL, "β KHP 0.05 M");
-  });
-  test("phosphate 0.025/0.025 M: 0.029", () => {
-    f.expectAbs(betaOf(f.mixture([f.KH2PO4, 0.025], [f.Na2HPO4, 0.025])).beta, 0.029, TOL, "β phosphate 0.025/0.025 M");
-  });
-
-  // Known failure (documented, asserted): borax 0.01 M is tabulated as 0.020, below ln10·C/4 =
-  // 0.0230, the largest β a one-step acid of C = 0.04 mol/L total can have in an ideal solution; the
-  // model gives 0.0237 (Davies) and 0.0231 (ideal). The tabulated value must include effects outside
-  // a single B(OH)₃/B(OH)₄⁻ step (polyborate ions form at this boron level — from memory,
-  // unverified), so no choice of the borate constants can match it.
-  test("known failure: borax 0.01 M (tabulated 0.020) stays 0.003–0.005 above the table", () => {
-    const beta = betaOf(f.mixture([f.borax, 0.01])).beta;
-    const diff = beta - 0.02;
-    if (!(diff > TOL && diff < 0.005)) {
-      throw new Error(`borax β no longer deviates as documented\n  actual ${beta}\n  expected 0.020 + (${TOL}…0.005)`);
-    }
-    expect(diff).toBeGreaterThan(TOL);
+describe("β of standards vs Lange's Table 8.15 (test/reference/lange-beta.json)", () => {
+  // The borax row is a known deviation (its reason is in the file): asserted to stay off as documented.
+  test.each(casesOf("lange-beta"))("$id: $label, β $printed", (c) => {
+    f.expectReference(betaOf(f.referenceMixture(c.mixture)).beta, c, `β ${c.label}, Davies`);
   });
 });
 

@@ -142,3 +142,51 @@ export function expectRel(actual: number, expected: number, rtol: number, contex
   }
   expect(ok).toBe(true);
 }
+
+/** The fixture for each library name the reference tables (test/reference/*.json) use. */
+const BY_REFERENCE_NAME: Record<string, Component> = {
+  "KH2 citrate": KH2citrate,
+  KHP: KHphthalate,
+  KH2PO4,
+  NaH2PO4,
+  Na2HPO4,
+  borax,
+  NaHCO3,
+  Na2CO3,
+  HCl,
+  "acetic acid": aceticAcid,
+  "sodium acetate": sodiumAcetate,
+};
+
+/** A reference case's mixture ([library name, mol/L] pairs) with these fixtures. */
+export function referenceMixture(pairs: readonly [string, number][] | undefined): Mixture {
+  if (pairs === undefined) throw new Error("the reference case has no mixture");
+  return pairs.map(([name, conc]) => {
+    const component = BY_REFERENCE_NAME[name];
+    if (component === undefined) throw new Error(`no fixture for "${name}" (add it to BY_REFERENCE_NAME)`);
+    return { component, conc };
+  });
+}
+
+/**
+ * Checks a computed value against a reference case (test/reference): within its tolerance, or, for
+ * a known deviation, off by more than the tolerance and at most its bound (a change that fixes or
+ * worsens it is noticed; it is never skipped).
+ */
+export function expectReference(
+  actual: number,
+  c: { id: string; expected: number; tolerance: { value: number }; knownDeviation?: { reason: string; bound: number } },
+  context: string,
+): void {
+  if (c.knownDeviation === undefined) {
+    expectAbs(actual, c.expected, c.tolerance.value, `${c.id}: ${context}`);
+    return;
+  }
+  const diff = Math.abs(actual - c.expected);
+  if (!(diff > c.tolerance.value && diff <= c.knownDeviation.bound)) {
+    throw new Error(
+      `${c.id}: ${context}: known deviation no longer behaves as documented (${c.knownDeviation.reason})\n  actual ${actual}\n  expected ${c.expected}, deviation between ${c.tolerance.value} and ${c.knownDeviation.bound}`,
+    );
+  }
+  expect(diff).toBeGreaterThan(c.tolerance.value);
+}

@@ -1,18 +1,21 @@
 /**
  * pKa(T) by van 't Hoff with ΔrCp° (Goldberg 2002 data) against independent temperature equations
- * fitted to measurements (REFERENCES §3, status X).
+ * fitted to measurements (docs/references.md, section 3, status X).
  */
 import { pKaAtTemperature, thermodynamicPKa, type PkaStep } from "../../src/chem";
+import { evaluate, printedValue, referenceTable } from "../reference";
 import { expectAbs } from "./fixtures";
 
-// Goldberg, Kishore & Lennen, J. Phys. Chem. Ref. Data 31, 231 (2002) (REFERENCES §3, X).
+// Goldberg, Kishore & Lennen, J. Phys. Chem. Ref. Data 31, 231 (2002) (docs/references.md, section 3, X).
 const TRIS: PkaStep = { pKa: 8.072, dH: 47.45, dCp: -59 };
 const PHOSPHATE_2: PkaStep = { pKa: 7.198, dH: 3.6, dCp: -230 };
 
-// Bates & Hetzer, J. Phys. Chem. 65, 667 (1961): pK = 2981.4/T − 3.5888 + 0.005571·T.
-const batesHetzerTris = (T: number): number => 2981.4 / T - 3.5888 + 0.005571 * T;
-// Bates & Acree (1943): ln K2 = 172.1033 − 8814.715/T − 27.927·ln T (phosphate, second step).
-const batesAcreePhosphate2 = (T: number): number => -(172.1033 - 8814.715 / T - 27.927 * Math.log(T)) / Math.LN10;
+// The independent temperature equations and their printed check values: test/reference/tris-pk.json
+// (Bates & Hetzer 1961) and phosphate-pk2.json (Bates & Acree 1943); docs/references.md, section 3.
+const TRIS_TABLE = referenceTable("tris-pk");
+const PHOS2_TABLE = referenceTable("phosphate-pk2");
+const batesHetzerTris = (T: number): number => evaluate(TRIS_TABLE.equation!, T - 273.15);
+const batesAcreePhosphate2 = (T: number): number => evaluate(PHOS2_TABLE.equation!, T - 273.15);
 
 function pK(step: PkaStep, t: number): number {
   const r = thermodynamicPKa(step, t);
@@ -20,15 +23,10 @@ function pK(step: PkaStep, t: number): number {
   return r.value;
 }
 
-describe("the independent equations as typed reproduce their printed values (REFERENCES §3)", () => {
-  // ±0.001: printed to 3 decimals.
-  test.each([
-    { what: "Tris 25 °C", value: () => batesHetzerTris(298.15), printed: 8.072 },
-    { what: "Tris 37 °C", value: () => batesHetzerTris(310.15), printed: 7.752 },
-    { what: "phosphate pK2 25 °C", value: () => batesAcreePhosphate2(298.15), printed: 7.2 },
-    { what: "phosphate pK2 37 °C", value: () => batesAcreePhosphate2(310.15), printed: 7.182 },
-  ])("$what: $printed", ({ what, value, printed }) => {
-    expectAbs(value(), printed, 0.001, what);
+describe("the independent equations as typed reproduce their printed values (docs/references.md, section 3)", () => {
+  const printed = [TRIS_TABLE, PHOS2_TABLE].flatMap((t) => t.cases.filter((c) => c.printed !== undefined).map((c) => ({ t, c })));
+  test.each(printed)("$c.id: $c.printed", ({ t, c }) => {
+    expectAbs(evaluate(t.equation!, c.temperatureC ?? NaN), printedValue(c), t.equation!.printedTolerance.value, `${t.id} at ${c.temperatureC} °C`);
   });
 });
 

@@ -1,19 +1,17 @@
 /** pKw(T) against the CRC table and the IAPWS check value. */
 import { pKw, kw, pKwIapws2006, pKwMarshallFranck, waterDensity } from "../../src/chem";
-import { expectAbs, expectRel } from "./fixtures";
+import { casesOf } from "../reference";
+import { expectAbs, expectReference, expectRel } from "./fixtures";
 
-// CRC Handbook, "Ionization constant of normal and heavy water", after Marshall & Franck,
-// J. Phys. Chem. Ref. Data 10, 295 (1981) (REFERENCES §2, status V). Saturated vapour pressure.
-const CRC: [number, number][] = [
-  [0, 14.938], [5, 14.727], [10, 14.528], [15, 14.34], [20, 14.163], [25, 13.995], [30, 13.836],
-  [35, 13.685], [40, 13.542], [45, 13.405], [50, 13.275], [60, 13.034], [80, 12.613], [100, 12.265],
-];
+// CRC Handbook table after Marshall & Franck (1981): test/reference/crc-pkw.json (source, status and
+// tolerance there; docs/references.md, section 2). Saturated vapour pressure.
+const CRC_CASES = casesOf("crc-pkw");
+const CRC: [number, number][] = CRC_CASES.map((c) => [c.temperatureC ?? NaN, c.expected]);
 
 describe("pKw(T), Marshall & Franck (1981) at saturated-liquid density", () => {
-  // ±0.001: the table is printed to 0.001 (±0.0005 rounding) and the density equation is not the
-  // one the table was computed with (another ±0.0005 at most).
-  test.each(CRC)("%s °C: CRC table %s", (t, expected) => {
-    expectAbs(pKw(t), expected, 0.001, `pKw(${t} °C)`);
+  // the table's tolerance (±0.001) and its reason: crc-pkw.json
+  test.each(CRC_CASES)("$id: $temperatureC °C, CRC table $printed", (c) => {
+    expectReference(pKw(c.temperatureC ?? NaN), c, `pKw(${c.temperatureC} °C)`);
   });
 
   test("kw is 10^−pKw", () => {
@@ -22,7 +20,7 @@ describe("pKw(T), Marshall & Franck (1981) at saturated-liquid density", () => {
 });
 
 describe("IAPWS R11-07 (Bandura & Lvov, J. Phys. Chem. Ref. Data 35, 15 (2006))", () => {
-  test("check value: ρ = 1000 kg/m³, T = 300 K → pKw 13.906565 (REFERENCES §2, V)", () => {
+  test("check value: ρ = 1000 kg/m³, T = 300 K → pKw 13.906565 (docs/references.md, section 2, V)", () => {
     // ±1e-6: the release prints 6 decimals.
     expectAbs(pKwIapws2006(300, 1.0), 13.906565, 1e-6, "pKwIapws2006(300 K, 1 g/cm³)");
   });

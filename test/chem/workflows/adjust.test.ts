@@ -8,6 +8,7 @@ import fc from "fast-check";
 import { kw, type Component, type Mixture } from "../../../src/chem";
 import { adjust } from "../../../src/chem/workflows";
 import { mixedWithStock, withAdded } from "../../../src/chem/workflows/mixing";
+import { casesOf } from "../../reference";
 import * as f from "./fixtures";
 
 const acetateBuffer = f.mixture([f.aceticAcid, 0.05], [f.sodiumAcetate, 0.05]);
@@ -36,22 +37,17 @@ describe("adjust: identities of the charge balance (ideal activity)", () => {
 });
 
 describe("adjust: published preparation", () => {
-  // Bates & Bower, Anal. Chem. 28, 1322 (1956) (Lange's Handbook Table 8.16; REFERENCES §5, V):
-  // 50 mL 0.1 M KHP + x mL 0.1 M HCl diluted to 100 mL, 25 °C: pH 3.00 at x = 22.3, 2.40 at 42.2.
-  // In the final solution: KHP 0.05 M and HCl x/1000 M. The table is empirical (other electrodes and
-  // conventions): ±0.05 pH (REFERENCES §5), so the table's x must lie between the amounts adjust
-  // finds for target ± 0.05.
-  test.each([
-    { pH: 3.0, x: 22.3 },
-    { pH: 2.4, x: 42.2 },
-    { pH: 2.8, x: 28.9 },
-    { pH: 3.2, x: 15.7 },
-  ])("KHP 0.05 M + HCl to pH $pH: table x = $x mL", ({ pH, x }) => {
+  // KHP + HCl (test/reference/khp-hcl.json; docs/references.md, section 5): 50 mL 0.1 M KHP + x mL
+  // 0.1 M HCl diluted to 100 mL, 25 °C. In the final solution: KHP 0.05 M and HCl x/1000 M. The
+  // table's x must lie between the amounts adjust finds for target ∓ the table's tolerance.
+  test.each(casesOf("khp-hcl"))("$id: KHP 0.05 M + HCl to pH $printed: table x = $stock.titrant_mL mL", (c) => {
+    const x = c.stock!.titrant_mL;
+    const tol = c.tolerance.value;
     const mix = f.mixture([f.KHphthalate, 0.05]);
-    const upper = f.ok(adjust(mix, f.HCl, pH - 0.05)).value * 1000;
-    const lower = f.ok(adjust(mix, f.HCl, pH + 0.05)).value * 1000;
+    const upper = f.ok(adjust(mix, f.HCl, c.expected - tol)).value * 1000;
+    const lower = f.ok(adjust(mix, f.HCl, c.expected + tol)).value * 1000;
     const inside = x >= lower && x <= upper;
-    if (!inside) throw new Error(`KHP + HCl to pH ${pH}: table x ${x} mL outside [${lower}, ${upper}] mL (±0.05 pH)`);
+    if (!inside) throw new Error(`${c.id}: table x ${x} mL outside [${lower}, ${upper}] mL (±${tol} pH)`);
     expect(inside).toBe(true);
   });
 });

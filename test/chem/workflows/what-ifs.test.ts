@@ -6,18 +6,21 @@
 import { debyeHuckelA, solveEquilibrium, type Mixture } from "../../../src/chem";
 import { recipe } from "../../../src/chem/workflows";
 import { scaled } from "../../../src/chem/workflows/mixing";
+import { evaluate, referenceCase, referenceTable } from "../../reference";
 import * as f from "./fixtures";
 
-const phosphateStandard = f.mixture([f.KH2PO4, 0.025], [f.Na2HPO4, 0.025]);
+const phosphateStandard = f.referenceMixture(referenceCase("ph-eur-buffers", "PHEUR-PHOS-1-1-25").mixture);
+/** Ph. Eur. ΔpH/Δt of the 0.025/0.025 phosphate, pH/K. */
+const PHOS_SLOPE = referenceTable("ph-eur-buffers").slopes!.values["PHOS-1-1"];
 
 describe("temperature what-ifs", () => {
-  // European Pharmacopoeia 2.2.3, Table 2.2.3.-2 (REFERENCES §1, V): phosphate 0.025/0.025 M,
-  // ΔpH/Δt = −0.0028 K⁻¹; the table's 15/20/25 °C values are 6.90/6.88/6.87.
+  // European Pharmacopoeia 2.2.3, Table 2.2.3.-2 (test/reference/ph-eur-buffers.json; docs/references.md,
+  // section 1, V): phosphate 0.025/0.025 M, ΔpH/Δt = −0.0028 K⁻¹; the table's 15/20/25 °C values are 6.90/6.88/6.87.
   // (1) Near 25 °C: the slope over 15–25 °C within ±0.001 K⁻¹ — the table prints two decimals, so
   //     its own 10 K difference is uncertain by ±0.01 pH, i.e. ±0.001 K⁻¹.
   test("phosphate standard, 15 → 25 °C: slope −0.0028 ± 0.001 K⁻¹ (Ph. Eur.)", () => {
     const slope = (f.pH(phosphateStandard, { temperatureC: 25 }) - f.pH(phosphateStandard, { temperatureC: 15 })) / 10;
-    f.expectAbs(slope, -0.0028, 0.001, "phosphate 0.025/0.025 M, (pH(25) − pH(15))/10 K");
+    f.expectAbs(slope, PHOS_SLOPE, 0.001, "phosphate 0.025/0.025 M, (pH(25) − pH(15))/10 K");
   });
 
   // (2) 5 °C vs 25 °C: the pH is higher in the cold, and the shift is the coefficient's
@@ -30,7 +33,7 @@ describe("temperature what-ifs", () => {
     const p15 = f.pH(phosphateStandard, { temperatureC: 15 });
     const p25 = f.pH(phosphateStandard, { temperatureC: 25 });
     expect(p5).toBeGreaterThan(p25);
-    f.expectAbs(p5 - p25, 0.0028 * 20, 0.035, "phosphate 0.025/0.025 M, pH(5 °C) − pH(25 °C)");
+    f.expectAbs(p5 - p25, -PHOS_SLOPE * 20, 0.035, "phosphate 0.025/0.025 M, pH(5 °C) − pH(25 °C)");
     expect((p5 - p15) / 10).toBeGreaterThan((p15 - p25) / 10);
   });
 
@@ -44,19 +47,13 @@ describe("temperature what-ifs", () => {
     f.expectAbs(shift, standardShift, 0.005, "recipe batch shift 25 → 5 °C vs the standard's");
   });
 
-  // Tris: pK = 2981.4/T − 3.5888 + 0.005571·T, Bates & Hetzer, J. Phys. Chem. 65, 667 (1961)
-  // (REFERENCES §3, X): 8.072 at 25 °C, 7.752 at 37 °C. In a 1:1 Tris/Tris·H⁺ buffer the pH follows
+  // Tris: the pK equation of Bates & Hetzer, J. Phys. Chem. 65, 667 (1961) (docs/references.md,
+  // section 3, X): 8.072 at 25 °C, 7.752 at 37 °C. In a 1:1 Tris/Tris·H⁺ buffer the pH follows
   // the pK: pH = pK + log([L]/[HL⁺]) + A·f(I) for the +1 → 0 step, and A·f(I) changes by ~0.001
   // between 5 and 37 °C at I = 0.025. Tolerance ±0.01: the engine's pK(T) comes from Goldberg 2002's
   // ΔrH° 47.45 kJ/mol and ΔrCp° −59 J/(K·mol), not from this equation.
-  const batesHetzer = (tC: number): number => {
-    const T = tC + 273.15;
-    return 2981.4 / T - 3.5888 + 0.005571 * T;
-  };
-  test("the Bates–Hetzer equation as typed gives its printed values (8.072 at 25 °C, 7.752 at 37 °C)", () => {
-    f.expectAbs(batesHetzer(25), 8.072, 0.001, "Bates & Hetzer at 25 °C");
-    f.expectAbs(batesHetzer(37), 7.752, 0.001, "Bates & Hetzer at 37 °C");
-  });
+  // (the equation and its printed check values: test/reference/tris-pk.json, checked in test/chem/temperature.test.ts)
+  const batesHetzer = (tC: number): number => evaluate(referenceTable("tris-pk").equation!, tC);
   test.each([37, 5])("Tris 0.05 M + HCl 0.025 M made at 25 °C, used at %s °C: pH shift = Bates–Hetzer pK shift ± 0.01", (t) => {
     const tris: Mixture = f.mixture([f.trisBase, 0.05], [f.HCl, 0.025]);
     const shift = f.pH(tris, { temperatureC: t }) - f.pH(tris, { temperatureC: 25 });
