@@ -1,5 +1,5 @@
 /**
- * npm run validate — runs the published reference checks (scripts/validation/cases.ts) through the
+ * npm run validate — runs the published reference checks (test/reference/*.json, through scripts/validation/cases.ts) through the
  * AQ functions as a user types them and writes the report for QA:
  *   reports/validation-report.md and reports/validation-report.html (generated, not tracked).
  * Options: --out DIR (instead of reports/), --sample FILE (also write the Markdown there, e.g.

@@ -1,10 +1,10 @@
 /**
- * The validation cases: published reference values, each with its source and locator, the
- * conditions, the formula a user would type, the expected value, and the tolerance with its reason.
- * Read by scripts/validate.ts (the report for QA) and test/docs/validation.test.ts.
+ * The validation cases: the published reference cases of test/reference/*.json (one home for each
+ * value, its source, locator and tolerance with its reason), each turned into the formula a user
+ * would type, and the identity sheets below. Read by scripts/validate.ts (the report for QA) and
+ * test/docs/validation.test.ts.
  *
- * Sources are those the team verified (../shared/REFERENCES.md, status V or X only; values marked
- * M there are never used as oracles). Compositions tabulated in mol/kg are typed as mol/L: at these
+ * Sources: docs/references.md (status V or X only; values marked M there are never oracles). Compositions tabulated in mol/kg are typed as mol/L: at these
  * dilutions the two scales differ by less than 0.3 %, below 0.001 pH.
  *
  * A case that exceeds its tolerance for a documented reason carries `knownDeviation`: it is listed
@@ -39,7 +39,7 @@ export interface ValidationCase {
   /** The equation the expected value was computed from, when the source gives an equation. */
   expectedFrom?: string;
   /**
-   * REFERENCES.md status of the value: "V" seen in the published source (or a faithful copy), "X"
+   * docs/references.md status of the value: "V" seen in the published source (or a faithful copy), "X"
    * cross-checked against an independent measurement or compilation. Values marked "M" (from
    * memory) are never used here. "identity": a relation that must hold by definition.
    */

@@ -98,7 +98,7 @@ export function reportMarkdown(run: ValidationRun, ctx: ReportContext): string {
   const lines: string[] = [
     "# Protolyte validation report",
     "",
-    `Generated ${ctx.date} by \`npm run validate\` (scripts/validate.ts; the cases with their sources are in scripts/validation/cases.ts).`,
+    `Generated ${ctx.date} by \`npm run validate\` (scripts/validate.ts; the published cases with their sources and tolerances are in test/reference/*.json, described in docs/references.md; the identity checks in scripts/validation/cases.ts).`,
     "",
     `> ${SUPPORT_STATEMENT}`,
     "",

@@ -30,7 +30,7 @@ export const SOLVER = {
 
 /** Warning thresholds. */
 export const LIMITS = {
-  /** mol/L: above this the activity models lose accuracy (Davies 1962; REFERENCES §2 gives 0.3–0.5). */
+  /** mol/L: above this the activity models lose accuracy (Davies 1962; docs/references.md, section 2 gives 0.3–0.5). */
   ionicStrengthCaution: 0.3,
   /** mol/L: extended Debye–Hückel (one ion-size parameter for every ion) is meant for I ≤ 0.1 (README, Validity limits). */
   debyeHuckelCaution: 0.1,

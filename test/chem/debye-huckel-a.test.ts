@@ -1,4 +1,4 @@
-/** Debye–Hückel A(T) against Freeze & Cherry, Groundwater (1979), App. IV (REFERENCES §2, V). */
+/** Debye–Hückel A(T) against Freeze & Cherry, Groundwater (1979), App. IV (docs/references.md, section 2, V). */
 import { debyeHuckelA } from "../../src/chem";
 import { expectAbs } from "./fixtures";
 
@@ -8,7 +8,7 @@ const FREEZE_CHERRY: [number, number][] = [
 
 describe("A(T) from εr (Malmberg & Maryott 1956) and CODATA constants", () => {
   // ±0.004: Freeze & Cherry's table lies 0.002–0.004 below values computed from modern
-  // permittivity data; REFERENCES §2 notes that tabulations differ (0.509–0.512 at 25 °C), a spread
+  // permittivity data; docs/references.md, section 2 notes that tabulations differ (0.509–0.512 at 25 °C), a spread
   // worth ±0.002 pH at I = 0.1.
   test.each(FREEZE_CHERRY)("%s °C: Freeze & Cherry %s", (t, expected) => {
     expectAbs(debyeHuckelA(t), expected, 0.004, `A(${t} °C)`);
@@ -20,7 +20,7 @@ describe("A(T) from εr (Malmberg & Maryott 1956) and CODATA constants", () => {
     expectAbs(debyeHuckelA(60) - debyeHuckelA(0), 0.5425 - 0.4883, 0.0015, "A(60 °C) − A(0 °C)");
   });
 
-  test("A lies within the 0.509–0.512 spread of tabulations at 25 °C (REFERENCES §2)", () => {
+  test("A lies within the 0.509–0.512 spread of tabulations at 25 °C (docs/references.md, section 2)", () => {
     expectAbs(debyeHuckelA(25), 0.5105, 0.0015, "A(25 °C)");
   });
 

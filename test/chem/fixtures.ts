@@ -5,7 +5,7 @@
  *
  * Goldberg 2002 = Goldberg, Kishore & Lennen, "Thermodynamic quantities for the ionization reactions
  * of buffers", J. Phys. Chem. Ref. Data 31, 231 (2002): pK at 25 °C and I = 0, ΔrH° (kJ/mol),
- * ΔrCp° (J/(K·mol)). Status letters from /work/shared/REFERENCES.md §3 (X cross-checked, M from
+ * ΔrCp° (J/(K·mol)). Status letters from docs/references.md, section 3 (X cross-checked, M from
  * memory, unverified: used as data only, never as a test oracle).
  */
 import type { AcidBaseSystem, Component, Mixture, StrongIon } from "../../src/chem";
@@ -56,7 +56,7 @@ export const carbonate: AcidBaseSystem = {
   ],
 };
 
-/** B(OH)₃ → B(OH)₄⁻: pK 9.237, ΔrH° 13.8, ΔrCp° −240 — REFERENCES §3 status M (from memory, unverified). */
+/** B(OH)₃ → B(OH)₄⁻: pK 9.237, ΔrH° 13.8, ΔrCp° −240 — docs/references.md, section 3 status M (from memory, unverified). */
 export const borate: AcidBaseSystem = {
   id: "borate",
   name: "borate",

@@ -6,6 +6,7 @@
  */
 import { AQ } from "../support/aq-values";
 import { CATALOGUE } from "../../src/functions/catalogue";
+import { referenceCase } from "../reference";
 
 function errorOf(call: () => unknown): { code: string; message: string } {
   try {
@@ -131,9 +132,9 @@ describe("results", () => {
     }
   });
 
-  test("MOLARMASS matches the CIAAW-based spot check for Na2HPO4·7H2O (268.07 g/mol)", () => {
-    // REFERENCES §4 spot check, from CIAAW conventional atomic weights; ±0.01 g/mol (printed precision).
-    expect(Math.abs(AQ.MOLARMASS("Na2HPO4·7H2O") - 268.07)).toBeLessThanOrEqual(0.01);
+  test("MOLARMASS matches the CIAAW-based spot check for Na2HPO4·7H2O (test/reference/molar-masses.json)", () => {
+    const c = referenceCase("molar-masses", "MM-NA2HPO4-7H2O");
+    expect(Math.abs(AQ.MOLARMASS(c.substance!) - c.expected)).toBeLessThanOrEqual(c.tolerance.value);
   });
 
   test("CONSTANTS_ID is the library version and fingerprint", () => {

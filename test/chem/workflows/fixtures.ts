@@ -4,7 +4,7 @@
  * helpers. Every constant names its source.
  *
  * Molar masses: computed from the CIAAW conventional standard atomic weights listed in
- * /work/shared/REFERENCES.md §4 (H 1.008, C 12.011, N 14.007, O 15.999, Na 22.98976928,
+ * docs/references.md, section 4 (H 1.008, C 12.011, N 14.007, O 15.999, Na 22.98976928,
  * P 30.973761998, K 39.0983, Cl 35.45); spot checks there (V): Na₂HPO₄·7H₂O 268.07,
  * L-histidine HCl·H₂O 209.63.
  */
@@ -16,7 +16,7 @@ export * from "../fixtures";
 
 /**
  * Histidine H₃L²⁺ → H₂L⁺ → HL → L⁻. Imidazole step pK 6.07, ΔrH° 29.5, ΔrCp° 176: Goldberg 2002
- * (REFERENCES §3, status X). pK1 ≈ 1.54 and pK3 ≈ 9.34 (ΔrH° 43.8): status M, from memory,
+ * (docs/references.md, section 3, status X). pK1 ≈ 1.54 and pK3 ≈ 9.34 (ΔrH° 43.8): status M, from memory,
  * unverified — used as data only, never as an oracle.
  */
 export const histidine: AcidBaseSystem = {
@@ -30,7 +30,7 @@ function withMass(c: Component, name: string, molarMass: number): Component {
   return { ...c, id: name, name, molarMass };
 }
 
-/** C₆H₉N₃O₂, 155.157 g/mol (CIAAW, REFERENCES §4). */
+/** C₆H₉N₃O₂, 155.157 g/mol (CIAAW, docs/references.md, section 4). */
 export const histidineBase: Component = {
   id: "L-histidine",
   name: "L-histidine",
@@ -38,7 +38,7 @@ export const histidineBase: Component = {
   ions: [],
   molarMass: 155.157,
 };
-/** C₆H₉N₃O₂·HCl·H₂O, 209.63 g/mol (CIAAW; REFERENCES §4 spot check 209.63, V). */
+/** C₆H₉N₃O₂·HCl·H₂O, 209.63 g/mol (CIAAW; docs/references.md, section 4 spot check 209.63, V). */
 export const histidineHCl: Component = {
   id: "L-histidine HCl·H2O",
   name: "L-histidine HCl·H2O",
@@ -49,7 +49,7 @@ export const histidineHCl: Component = {
 
 /** 137.991 g/mol (CIAAW). */
 export const NaH2PO4H2O = withMass(base.NaH2PO4, "NaH2PO4·H2O", 137.991);
-/** 268.062 g/mol (CIAAW; REFERENCES §4 spot check 268.07, V — the difference is the atomic weights' rounding). */
+/** 268.062 g/mol (CIAAW; docs/references.md, section 4 spot check 268.07, V — the difference is the atomic weights' rounding). */
 export const Na2HPO47H2O = withMass(base.Na2HPO4, "Na2HPO4·7H2O", 268.062);
 /** 136.084 g/mol (CIAAW). */
 export const KH2PO4m = withMass(base.KH2PO4, "KH2PO4", 136.084);
@@ -65,7 +65,7 @@ export const NaClM = withMass(base.NaCl, "NaCl", 58.44);
 export const NaOHM = withMass(base.NaOH, "NaOH", 39.997);
 /** 36.458 g/mol (CIAAW). */
 export const HClM = withMass(base.HCl, "HCl", 36.458);
-/** 204.222 g/mol (CIAAW; REFERENCES §4 spot check 204.22, V). */
+/** 204.222 g/mol (CIAAW; docs/references.md, section 4 spot check 204.22, V). */
 export const KHPm = withMass(base.KHphthalate, "KH phthalate", 204.222);
 /** A non-electrolyte (sucrose-like): moves no pH. */
 export const sucrose: Component = { id: "sucrose", name: "sucrose", systems: [], ions: [], neutral: 1 };

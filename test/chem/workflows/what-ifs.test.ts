@@ -71,7 +71,7 @@ describe("temperature what-ifs", () => {
 
 describe("dilution what-ifs", () => {
   // A 10× phosphate stock (0.05/0.05 M, I ≈ 0.2 mol/L) diluted to 0.005/0.005 M (I ≈ 0.02).
-  // No published dilution value ΔpH½ is in REFERENCES.md, so the check is against the activity
+  // No published dilution value ΔpH½ is in docs/references.md, so the check is against the activity
   // model itself: for the pK2 step (acid charge −1) Henderson–Hasselbalch with Davies gives
   // pH = pK2 + log([HPO₄²⁻]/[H₂PO₄⁻]) − 3·A·F(I), F(I) = √I/(1 + √I) − 0.3·I, and the ratio does not
   // change on dilution, so ΔpH = 3·A·(F(I_stock) − F(I_diluted)) with the solved ionic strengths.
