@@ -48,7 +48,7 @@ function cliConfig(production) {
     name: "cli",
     target: "node20",
     devtool: false,
-    entry: { protolyte: "./src/cli/bin.ts" },
+    entry: { protolyte: "./src/cli/bin.ts", "table-worker": "./src/cli/table-worker.ts" },
     output: { path: path.resolve(__dirname, "dist", "cli"), filename: "[name].js", clean: true },
     resolve: { extensions: [".ts", ".js", ".json"] },
     externals: [nodeModulesExternal],

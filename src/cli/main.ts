@@ -13,6 +13,7 @@ import { LimitError } from "./limits";
 import { parseOptions, UsageError } from "./options";
 import { processPrinter, type Printer } from "./printer";
 import { runSheet } from "./sheet-command";
+import { runTable } from "./table";
 import { CsvError } from "./csv";
 
 export const USAGE = `Usage:
@@ -21,6 +22,8 @@ export const USAGE = `Usage:
   protolyte sheet FILE.csv|FILE.xlsx [--out OUT.csv|OUT.xlsx] [--sheet NAME] [--json] [--digits N]
                   [--separator C] [--library FILE.json]… [--no-workbook-library]
       evaluate every formula of a sheet; print the values, or write them with --out
+  protolyte table [FUNCTION] FILE.csv [name=value]… [--out OUT.csv] [--workers N] [--library FILE.json]…
+      a what-if table of any length, streamed: one result per CSV row (see the README)
 Spilled tables print as tab-separated rows; error cells and a summary go to stderr.
 Exit status: 0 evaluated, 1 eval gave an error value, 2 usage, file, limit or library problem.`;
 
@@ -36,6 +39,11 @@ export async function main(argv: string[], print: Printer = processPrinter()): P
       return 0;
     }
     if (command === undefined) throw new UsageError("no command given");
+    if (command === "table") {
+      const code = await runTable(argv.slice(1), print);
+      print.flush();
+      return code;
+    }
     const options = parseOptions(argv.slice(1));
     let code: number;
     if (command === "eval") code = await runEval(options, print);
