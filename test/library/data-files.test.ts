@@ -95,7 +95,7 @@ describe("provenance of every built-in number", () => {
   });
 });
 
-describe("values as read in their published sources (the source and place are in the data; REFERENCES §3)", () => {
+describe("values as read in their published sources (the source and place are in the data; docs/references.md, section 3)", () => {
   const sys = (id: string) => (BUILTIN_LIBRARY.systems ?? []).find((s) => s.id === id)!;
   test.each([
     // id, step, pK, ΔrH° (kJ/mol), ΔrCp° (J/(K·mol)), source id
