@@ -108,6 +108,7 @@ describe("values as read in their published sources (the source and place are in
     ["ches", 0, 9.394, 39.55, 9.5, "roy-1997-aces-ches"], // from pK2 = 1917.66/T + 5.7940 − 0.4971·ln T
     ["aces", 0, 6.847, 30.43, -61.6, "roy-1997-aces-ches"], // from pK2 = 2548.60/T − 20.03159 + 3.2172·ln T
     ["triethanolamine", 0, 7.762, 33.45, 52, "bates-allen-1960"],
+    ["caps", 0, 10.499, 48.2, 94.5, "roy-1997-caps"], // from pK2 = 1046.64/T + 35.10191 − 4.9342·ln T
   ])("%s step %i: pK %d, ΔrH° %d kJ/mol, ΔrCp° %d J/(K·mol) (%s)", (id, i, pKa, dH, dCp, source) => {
     const step = sys(id).steps[i];
     expect([step.pKa.value, step.dH?.value, step.dCp?.value]).toEqual([pKa, dH, dCp]);
