@@ -98,6 +98,8 @@ function formulaOf(t: ReferenceTable, c: ReferenceCase): Pick<ValidationCase, "f
       return { formula: `=AQ.PKA("${c.system}",${c.step},${c.temperatureC},0)` };
     case "molar-mass":
       return { formula: `=AQ.MOLARMASS("${c.substance}")${c.factor === 1 ? "" : `*${c.factor}`}` };
+    default:
+      throw new Error(`${t.id}: the validation report has no formula for a ${t.quantity} case (add one here, or leave the table out of GROUPS)`);
   }
 }
 
@@ -115,6 +117,8 @@ function conditionsOf(t: ReferenceTable, c: ReferenceCase): string {
       return `${t.conditions.replace(/, I = 0$/, "")}, ${c.temperatureC} °C, I = 0`;
     case "molar-mass":
       return c.label ?? c.substance ?? "";
+    default:
+      return c.label ?? "";
   }
 }
 

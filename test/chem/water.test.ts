@@ -1,6 +1,6 @@
 /** pKw(T) against the CRC table and the IAPWS check value. */
 import { pKw, kw, pKwIapws2006, pKwMarshallFranck, waterDensity } from "../../src/chem";
-import { casesOf } from "../reference";
+import { casesOf, referenceCase } from "../reference";
 import { expectAbs, expectReference, expectRel } from "./fixtures";
 
 // CRC Handbook table after Marshall & Franck (1981): test/reference/crc-pkw.json (source, status and
@@ -20,9 +20,9 @@ describe("pKw(T), Marshall & Franck (1981) at saturated-liquid density", () => {
 });
 
 describe("IAPWS R11-07 (Bandura & Lvov, J. Phys. Chem. Ref. Data 35, 15 (2006))", () => {
-  test("check value: ρ = 1000 kg/m³, T = 300 K → pKw 13.906565 (docs/references.md, section 2, V)", () => {
-    // ±1e-6: the release prints 6 decimals.
-    expectAbs(pKwIapws2006(300, 1.0), 13.906565, 1e-6, "pKwIapws2006(300 K, 1 g/cm³)");
+  test("check value: ρ = 1000 kg/m³, T = 300 K (test/reference/iapws-pkw.json; docs/references.md, section 2, V)", () => {
+    const c = referenceCase("iapws-pkw", "PKW-IAPWS-300K");
+    expectReference(pKwIapws2006(c.temperatureC! + 273.15, c.densityGPerCm3!), c, "pKwIapws2006(300 K, 1 g/cm³)");
   });
 
   // ±0.02: the 2006 formulation rests on newer data and departs from the 1981 table by up to 0.015

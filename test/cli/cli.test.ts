@@ -10,6 +10,10 @@ import { parseCsv } from "../../src/cli/csv";
 import { evaluateFormula, evaluateSheets } from "../../src/cli/evaluate";
 
 import { requireBuild, root, run } from "./support/run";
+import { referenceCase } from "../reference";
+
+/** 0.05 mol/kg KH phthalate, pH(S) at 25 °C, with its tolerance. */
+const KHP_STD = referenceCase("ph-standards", "STD25-KHP");
 
 const tsx = join(root, "node_modules", ".bin", "tsx");
 const cli = join(root, "src", "cli", "bin.ts");
@@ -17,12 +21,12 @@ const cli = join(root, "src", "cli", "bin.ts");
 beforeAll(requireBuild);
 
 describe("evaluateFormula", () => {
-  test("potassium hydrogen phthalate 0.05 mol/L reads pH 4.005 ± 0.02", () => {
-    // Hamer, Pinching & Acree, J. Res. NBS 36, 47 (1946): 0.05 mol/kg KHP, pH(S) 4.005 at 25 °C.
+  test("potassium hydrogen phthalate 0.05 mol/L reads its pH(S) within the standard's tolerance", () => {
+    // Hamer, Pinching & Acree (1946), pH(S) at 25 °C: test/reference/ph-standards.json.
     // ±0.02: Davies activity against the Bates–Guggenheim convention, molarity ≈ molality at 0.05.
     const r = evaluateFormula('=AQ.PH("potassium hydrogen phthalate", 0.05)');
     expect(r.error).toBeUndefined();
-    expect(Math.abs((r.value as number) - 4.005)).toBeLessThanOrEqual(0.02);
+    expect(Math.abs((r.value as number) - KHP_STD.expected)).toBeLessThanOrEqual(KHP_STD.tolerance.value);
   });
 
   test("inline arrays, unit text and the same value as numbers", () => {
@@ -105,7 +109,7 @@ describe("protolyte command", () => {
     const plain = run(["eval", '=AQ.PH("potassium hydrogen phthalate",0.05)']);
     expect(plain.code).toBe(0);
     expect(plain.out.trim()).toMatch(/^\d+\.\d{3}$/); // a pH prints to 3 decimals
-    expect(Math.abs(Number(plain.out.trim()) - 4.005)).toBeLessThanOrEqual(0.02); // Hamer et al. 1946
+    expect(Math.abs(Number(plain.out.trim()) - KHP_STD.expected)).toBeLessThanOrEqual(KHP_STD.tolerance.value); // Hamer et al. 1946
     const json = run(["eval", "--json", '=AQ.PH("potassium hydrogen phthalate",0.05)']);
     const full = (JSON.parse(json.out) as { value: number }).value;
     expect(Math.abs(full - Number(plain.out.trim()))).toBeLessThanOrEqual(0.0005); // the same value, full precision

@@ -29,7 +29,7 @@ describe("reference tables", () => {
       const where = { id: t.id };
       expect({ ...where, ok: [t.title, t.source, t.locator, t.verified, t.conditions, t.unit].every((x) => typeof x === "string" && x.length > 1) }).toEqual({ ...where, ok: true });
       expect({ ...where, status: ["V", "X"].includes(t.status) }).toEqual({ ...where, status: true });
-      expect({ ...where, quantity: ["pH", "beta", "pKw", "pK", "molar-mass"].includes(t.quantity) }).toEqual({ ...where, quantity: true });
+      expect({ ...where, quantity: ["pH", "beta", "pKw", "pKw-density", "pK", "molar-mass", "debye-huckel-A"].includes(t.quantity) }).toEqual({ ...where, quantity: true });
       expect({ ...where, tolerance: t.tolerance.value > 0 && t.tolerance.reason.length > 20 }).toEqual({ ...where, tolerance: true });
       expect({ ...where, cases: t.cases.length > 0 }).toEqual({ ...where, cases: true });
     }
@@ -55,8 +55,10 @@ describe("reference tables", () => {
             ? (c.mixture?.length ?? 0) > 0 && c.mixture!.every(([n, a]) => n.length > 0 && a > 0) && c.temperatureC !== undefined
             : t.quantity === "pK"
               ? c.system !== undefined && Number.isInteger(c.step) && c.temperatureC !== undefined
-              : t.quantity === "pKw"
+              : t.quantity === "pKw" || t.quantity === "debye-huckel-A"
                 ? c.temperatureC !== undefined
+                : t.quantity === "pKw-density"
+                ? c.temperatureC !== undefined && (c.densityGPerCm3 ?? 0) > 0
                 : c.substance !== undefined && (c.factor ?? 0) > 0;
         expect({ id: c.id, needs }).toEqual({ id: c.id, needs: true });
         if (!t.equation && c.printed !== undefined) expect({ id: c.id, printed: Number(c.printed) }).toEqual({ id: c.id, printed: c.expected });
@@ -98,8 +100,10 @@ describe("one home for reference values", () => {
     ["Hetzer KHP equation", /\b(2073\.44|3\.4846e-5)\b/],
     ["Bates–Hetzer Tris equation", /\b(2981\.4|3\.5888|0\.005571)\b/],
     ["Bates–Acree phosphate equation", /\b(172\.1033|8814\.715|27\.927)\b/],
-    ["pH(S) of the primary standards", /\b(10\.012|7\.413|7\.382|0\.03043)\b/],
+    ["pH(S) of the primary standards", /\b(4\.005|10\.012|7\.413|7\.382|0\.03043)\b/],
     ["Ph. Eur. table", /\b(9\.28|10\.12|10\.06|7\.45)\b/],
+    ["Freeze & Cherry A table", /\b(0\.4883|0\.5042|0\.5221|0\.5425)\b/],
+    ["IAPWS check value", /\b13\.906565\b/],
   ];
 
   test.each(distinctive)("%s: typed only in test/reference", (_what, pattern) => {

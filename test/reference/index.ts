@@ -54,6 +54,8 @@ export interface ReferenceCase {
   /** Overrides the table's tolerance, with its own reason. */
   tolerance?: Tolerance;
   knownDeviation?: KnownDeviation;
+  /** pKw-density cases: the density the formulation is evaluated at, g/cm³. */
+  densityGPerCm3?: number;
   /** Ph. Eur. only: which buffer of the table. */
   key?: string;
 }
@@ -61,7 +63,7 @@ export interface ReferenceCase {
 export interface ReferenceTable {
   id: string;
   title: string;
-  quantity: "pH" | "beta" | "pKw" | "pK" | "molar-mass";
+  quantity: "pH" | "beta" | "pKw" | "pKw-density" | "pK" | "molar-mass" | "debye-huckel-A";
   unit: string;
   source: string;
   locator: string;
