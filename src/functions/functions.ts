@@ -29,6 +29,7 @@ import { constantsId } from "./aq/constants-id";
 import { ionic } from "./aq/ionic";
 import { molarMass } from "./aq/molar-mass";
 import { osmolarity } from "./aq/osmolarity";
+import { osmolality } from "./aq/osmolality";
 import { ph } from "./aq/ph";
 import { pka } from "./aq/pka";
 import { species as speciesTable } from "./aq/species";
@@ -158,6 +159,20 @@ export function IONIC(names: any[][], amounts: any[][], temperature?: any[][]): 
  */
 export function OSMOLARITY(names: any[][], amounts: any[][], temperature?: any[][]): any[][] {
   return rowwise(osmolarity, names, amounts, temperature);
+}
+
+/**
+ * Osmolality of a mixture, osmol per kg of water, as an osmometer reads it: molalities from the solution's density, the ions' osmotic coefficient from the activity model, published osmotic coefficients for sugars and polyols.
+ * @customfunction OSMOLALITY
+ * @helpurl https://localhost:3000/help/osmolality.html
+ * @param names Substance names (non-electrolytes such as sucrose count too).
+ * @param amounts Concentrations, mol/L (or unit text), same shape as names.
+ * @param [temperature] Temperature, °C (0–100). Default 25.
+ * @param [activity] Activity model: "davies" (default), "ideal" or "debye-huckel".
+ * @returns Osmolality, osmol/kg of water. Row-wise: names as one row and amounts with one row per mixture give one result per row (a spilled column).
+ */
+export function OSMOLALITY(names: any[][], amounts: any[][], temperature?: any[][], activity?: any[][]): any[][] {
+  return rowwise(osmolality, names, amounts, temperature, activity);
 }
 
 /**

@@ -95,6 +95,11 @@ describe.each([
     expect(result.values[rowOf(cells, "same as the back-fit of section 7?")][1]).toBe("yes");
   });
 
+  test("AQ.OSMOLALITY of the sucrose-made-isotonic HB-217 reads above its ideal osmolarity", () => {
+    const { cells, result } = get();
+    expect(numberAt(result, rowOf(cells, "HB-217 (mOsm/kg"), 1)).toBeGreaterThan(numberAt(result, rowOf(cells, "ideal osmolarity (mOsm/L)"), 1));
+  });
+
   test("the specification block and the what-if grid compute", () => {
     const { cells, result } = get();
     expect(result.values[rowOf(cells, "band inside the specification?")][1]).toBe("yes");

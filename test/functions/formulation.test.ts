@@ -105,3 +105,23 @@ describe("AQ.ADJUST measured_pH", () => {
     [`=AQ.ADJUST(${PHOS},7.1,"HCl",,,25,,16)`, /measured pH 16 is outside/],
   ])("%s is #VALUE!", (formula, message) => expectError(formula, "#VALUE!", message));
 });
+
+describe("AQ.OSMOLALITY", () => {
+  test("0.9 % saline: about 286 mOsm/kg (common practice) within 1.5 %, below the ideal AQ.OSMOLARITY", () => {
+    const osm = num('=AQ.OSMOLALITY("NaCl","0.9 % w/v")');
+    expectNear(osm * 1000, 286, 286 * 0.015, "0.9 % saline");
+    expect(osm).toBeLessThan(num('=AQ.OSMOLARITY("NaCl","0.9 % w/v")'));
+  });
+
+  test("250 mM sucrose reads above the ideal 250 mOsm/L; ideal activity gives osmolarity per kg of water", () => {
+    expect(num('=AQ.OSMOLALITY("sucrose",0.25)')).toBeGreaterThan(num('=AQ.OSMOLARITY("sucrose",0.25)'));
+    const ideal = num('=AQ.OSMOLALITY({"NaCl";"KH2PO4"},{0.1;0.02},25,"ideal")');
+    expect(ideal).toBeGreaterThan(num('=AQ.OSMOLARITY({"NaCl";"KH2PO4"},{0.1;0.02})'));
+  });
+
+  test.each([
+    ['=AQ.OSMOLALITY("NaCl",-0.1)', "#VALUE!", /negative/],
+    ['=AQ.OSMOLALITY("NaCl",0.1,25,"pitzer")', "#VALUE!", /activity 'pitzer' is not known/],
+    ['=AQ.OSMOLALITY("NaCl",3)', "#N/A", /ionic strength/],
+  ])("%s is %s", (formula, error, message) => expectError(formula, error, message));
+});
