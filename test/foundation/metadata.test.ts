@@ -12,7 +12,7 @@ interface Param { name: string; type?: string; dimensionality?: string; optional
 interface Fn { id: string; name: string; description?: string; helpUrl?: string; parameters: Param[]; result: { dimensionality?: string; type?: string } }
 
 const EXPECTED_IDS = [
-  "PH", "ADJUST", "BETA", "CAPACITY", "SPECIES", "IONIC", "OSMOLARITY", "PKA", "MOLARMASS", "RECIPE", "CURVE", "PHRANGE", "CONSTANTS_ID", "CHECK",
+  "PH", "ADJUST", "BETA", "CAPACITY", "SPECIES", "IONIC", "OSMOLARITY", "PKA", "MOLARMASS", "RECIPE", "CURVE", "PHRANGE", "CONSTANTS_ID", "CHECK", "OSMOLALITY",
 ];
 
 let functions: Fn[] = [];

@@ -28,6 +28,7 @@ const CALLS: [string, () => unknown][] = [
   ["CHECK", () => AQ.CHECK(names(), amounts())],
   ["IONIC", () => AQ.IONIC(names(), amounts())],
   ["OSMOLARITY", () => AQ.OSMOLARITY(names(), amounts())],
+  ["OSMOLALITY", () => AQ.OSMOLALITY(names(), amounts())],
   ["CURVE", () => AQ.CURVE(names(), amounts(), "NaOH", 1, 0.05, 0.002, 11)],
   ["PHRANGE", () => AQ.PHRANGE(names(), amounts(), frozen([[0.02], [0.02], [0.05]]) as never)],
   ["PH, unknown name", () => AQ.PH(bad(), amounts())],

@@ -107,6 +107,7 @@ describe("results", () => {
       CHECK: () => AQ.CHECK(...mix),
       IONIC: () => AQ.IONIC(...mix),
       OSMOLARITY: () => AQ.OSMOLARITY(...mix),
+      OSMOLALITY: () => AQ.OSMOLALITY(...mix),
       SPECIES: () => AQ.SPECIES(...mix),
       PKA: () => AQ.PKA("phosphate", 2),
       MOLARMASS: () => AQ.MOLARMASS("Na2HPO4·7H2O"),

@@ -47,13 +47,14 @@ const fn = (id: string, params: string[]): MixtureFunction => ({
 /** The AQ functions whose first two arguments are a mixture's names and amounts. */
 export const MIXTURE_FUNCTIONS: readonly MixtureFunction[] = [
   fn("PH", ["names", "amounts", "temperature", "activity"]),
-  fn("ADJUST", ["names", "amounts", "target_pH", "titrant", "titrant_conc", "volume", "temperature", "activity"]),
+  fn("ADJUST", ["names", "amounts", "target_pH", "titrant", "titrant_conc", "volume", "temperature", "activity", "measured_pH"]),
   fn("BETA", ["names", "amounts", "temperature", "activity"]),
   fn("CAPACITY", ["names", "amounts", "delta_pH", "temperature", "activity"]),
   fn("SPECIES", ["names", "amounts", "species", "temperature", "activity"]),
   fn("CHECK", ["names", "amounts", "temperature", "activity"]),
   fn("IONIC", ["names", "amounts", "temperature"]),
   fn("OSMOLARITY", ["names", "amounts", "temperature"]),
+  fn("OSMOLALITY", ["names", "amounts", "temperature", "activity"]),
   fn("CURVE", ["names", "amounts", "titrant", "titrant_conc", "volume", "max_titrant_volume", "points", "temperature"]),
   fn("PHRANGE", ["names", "amounts", "amount_tolerance", "pKa_uncertainty", "temperature"]),
 ];
