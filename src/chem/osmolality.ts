@@ -89,7 +89,7 @@ function integralOfShape(model: ChemOptions["activity"] & string, I: number): nu
 
 /** Δ_el(I), osmol/kg: the electrostatic osmotic term of the activity model. */
 export function electrostaticOsmoticTerm(model: ChemOptions["activity"] & string, I: number, temperatureC: number): number {
-  if (I <= 0 || model === "ideal") return 0;
+  if (I <= 0) return 0;
   return -2 * Math.LN10 * debyeHuckelA(temperatureC) * (I * activityShape(model, I) - integralOfShape(model, I));
 }
 

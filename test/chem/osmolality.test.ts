@@ -56,7 +56,7 @@ describe("the electrostatic osmotic term", () => {
   });
 
   test("ideal: no electrostatic term", () => {
-    expect(electrostaticOsmoticTerm("ideal", 0.2, 25)).toBe(0);
+    expect(Math.abs(electrostaticOsmoticTerm("ideal", 0.2, 25))).toBe(0);
   });
 });
 
@@ -103,7 +103,7 @@ describe("osmolality of formulations", () => {
     const mix = f.mixture([f.KH2PO4, 0.02], [f.Na2HPO4, 0.03], [NaCl, 0.1]);
     const r = ok(osmolality(mix, { activity: "ideal" }));
     f.expectRel(r.value, ok(osmolarity(mix, { activity: "ideal" })).value / r.waterPerLitre, 1e-12, "ideal identity");
-    expect(r.electrostatic).toBe(0);
+    expect(Math.abs(r.electrostatic)).toBe(0);
     expect(r.estimatedVolume.sort()).toEqual(["KH2PO4", "Na2HPO4"].sort());
   });
 
