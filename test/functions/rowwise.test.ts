@@ -43,6 +43,7 @@ const CASES: Case[] = [
   { id: "CHECK", rest: [col(TEMPS)], restA1: "G2:G6", column: TEMPS },
   { id: "IONIC", rest: [col(TEMPS)], restA1: "G2:G6", column: TEMPS },
   { id: "OSMOLARITY", rest: [col(TEMPS)], restA1: "G2:G6", column: TEMPS },
+  { id: "OSMOLALITY", rest: [col(TEMPS), "davies"], restA1: 'G2:G6,"davies"', column: TEMPS },
   { id: "CAPACITY", rest: [col([0.5, -0.3, 0.2, 0.1, 0.1]), 25], restA1: "G2:G6,25", column: [0.5, -0.3, 0.2, 0.1, 0.1] },
   { id: "ADJUST", rest: [col([5, 5.5, 5, 5, 5]), "NaOH", 1, 2], restA1: 'G2:G6,"NaOH",1,2', column: [5, 5.5, 5, 5, 5] },
   { id: "SPECIES", rest: ["CH3COO-", col(TEMPS)], restA1: '"CH3COO-",G2:G6', column: TEMPS },
