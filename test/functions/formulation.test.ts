@@ -86,17 +86,17 @@ describe("AQ.ADJUST measured_pH", () => {
     expectNear(model, 3.07, 0.005, "from the measured pH");
     // Too much Na2HPO4·7H2O: the extra that reads 7.35, then the HCl the real batch needs.
     const extra = num(`=AQ.ADJUST(${PHOS},7.35,"Na2HPO4·7H2O")`);
-    expectNear(extra * 1000, 31.6, 0.05, "mM of Na2HPO4·7H2O too much");
-    expectNear(num(`=AQ.ADJUST({"NaH2PO4·H2O";"Na2HPO4·7H2O"},{0.018375;${0.031625 + extra}},7.1,"HCl",1,500)`), 4.8, 0.005, "real need, too much Na2HPO4");
-    // NaH2PO4·H2O short by 7.9 mM (10.49 mM instead of 18.375): reads 7.35 too.
-    const short = '{"NaH2PO4·H2O";"Na2HPO4·7H2O"},{0.010492;0.031625}';
+    expectNear(extra * 1000, 31.8, 0.05, "mM of Na2HPO4·7H2O too much");
+    expectNear(num(`=AQ.ADJUST({"NaH2PO4·H2O";"Na2HPO4·7H2O"},{0.018375;${0.031625 + extra}},7.1,"HCl",1,500)`), 4.81, 0.005, "real need, too much Na2HPO4");
+    // NaH2PO4·H2O short by 7.9 mM (10.457 mM instead of 18.375): reads 7.35 too.
+    const short = '{"NaH2PO4·H2O";"Na2HPO4·7H2O"},{0.010457;0.031625}';
     expectNear(num(`=AQ.PH(${short})`), 7.35, 0.0005, "NaH2PO4 short reads 7.35");
-    expectNear(num(`=AQ.ADJUST(${short},7.1,"HCl",1,500)`), 2.63, 0.005, "real need, NaH2PO4 short");
+    expectNear(num(`=AQ.ADJUST(${short},7.1,"HCl",1,500)`), 2.62, 0.005, "real need, NaH2PO4 short");
   });
 
   test("without measured_pH, the same call starts from the computed pH and gives less HCl", () => {
-    const fromMeasured = num(`=AQ.ADJUST(${PHOS},7.1,"HCl",1,500,25,,7.35)`);
-    const fromComputed = num(`=AQ.ADJUST(${PHOS},7.1,"HCl",1,500)`);
+    const fromMeasured = num(`=AQ.ADJUST(${PHOS},7.0,"HCl",1,500,25,,7.35)`);
+    const fromComputed = num(`=AQ.ADJUST(${PHOS},7.0,"HCl",1,500)`);
     expect(fromComputed).toBeLessThan(fromMeasured);
   });
 
