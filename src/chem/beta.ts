@@ -34,8 +34,6 @@ export function bufferValue(core: ChargeBalanceSolver): number {
   for (let s = 0; s < core.nSys; s++) {
     const C = core.total(s);
     if (C === 0) continue;
-    const d = core.data;
-    const o = core.kcIndex(s);
     const n = core.stepCount(s);
     const z0 = core.topChargeOf(s);
     // First pass: means of k, w and z² over the species (relative amounts t_k, rescaled against
@@ -47,7 +45,7 @@ export function bufferValue(core: ChargeBalanceSolver): number {
     let sw = 0;
     let sq = z0 * z0;
     for (let k = 1; k <= n; k++) {
-      t *= d[o + k - 1] * invH;
+      t *= core.conditionalKa(s, k) * invH;
       const z = z0 - k;
       s0 += t;
       sk += k * t;
@@ -72,7 +70,7 @@ export function bufferValue(core: ChargeBalanceSolver): number {
     let vwq = -wBar * (z0 * z0 - qBar);
     t = 1;
     for (let k = 1; k <= n; k++) {
-      t *= d[o + k - 1] * invH;
+      t *= core.conditionalKa(s, k) * invH;
       const z = z0 - k;
       const dk = k - kBar;
       const dw = z0 * z0 - z * z - k - wBar;

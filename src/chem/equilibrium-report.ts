@@ -34,11 +34,10 @@ export function buildEquilibrium(core: ChargeBalanceSolver, agg: Aggregate): Equ
     const sys = agg.systems[s];
     const C = core.total(s);
     if (C > 0) hasSystem = true;
-    const o = core.kcIndex(s);
     const n = core.stepCount(s);
     // Relative amounts in log space: robust for any pKa/h combination, run once per report.
     const logT: number[] = [0];
-    for (let k = 1; k <= n; k++) logT.push(logT[k - 1] + Math.log(core.data[o + k - 1]) - x);
+    for (let k = 1; k <= n; k++) logT.push(logT[k - 1] + Math.log(core.conditionalKa(s, k)) - x);
     const top = Math.max(...logT);
     const rel = logT.map((v) => Math.exp(v - top));
     const sum = rel.reduce((a, b) => a + b, 0);

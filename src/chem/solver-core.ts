@@ -23,6 +23,7 @@ import { pKaAtTemperature } from "./temperature";
 import type { ActivityModel, AcidBaseSystem } from "./types";
 import { kw } from "./water";
 import { debyeHuckelA } from "./activity/debye-huckel-a";
+import { dataLayout, type DataLayout } from "./solver-data-layout";
 
 /** Smallest positive root of h − kwc/h + P = 0, computed without cancellation. */
 function waterRoot(P: number, kwc: number): number {
@@ -35,27 +36,16 @@ const EPS = 2.220446049250313e-16;
 export class ChargeBalanceSolver {
   readonly nSys: number;
   /**
-   * Every per-system and per-step number in one array, so that preparing a mixture makes one array
-   * rather than ten typed arrays (a 10 000-row what-if table prepares 10 000 mixtures; each typed
-   * array cost about 200 bytes of heap and a backing store for the garbage collector to sweep).
-   * Regions, n = nSys systems and m steps in all:
-   *   [0, n)       total mol/L of system s           [n, 2n)   z0, charge of its fully protonated form
-   *   [2n, 3n)     number of steps of system s       [3n, 4n)  index of its first step (0…m−1)
-   * then, each m long, from the offsets below: pKa at 25 °C, ΔrH° (kJ/mol), ΔrCp° (J/(K·mol)), the
-   * exponent z0 − j of exp(2g) in the conditional constant of step j (1-based within its system),
-   * the thermodynamic Ka at the current temperature, and the conditional (concentration) Ka at the
-   * current temperature and ionic strength.
+   * Every per-system and per-step number in one array, laid out as `at` says (DataLayout), so that
+   * preparing a mixture makes one array rather than ten typed arrays (a 10 000-row what-if table
+   * prepares 10 000 mixtures; each typed array cost about 200 bytes of heap and a backing store for
+   * the garbage collector to sweep). Read it through the accessors below.
    */
-  readonly data: number[];
+  private readonly data: number[];
+  /** Where each region of `data` starts. */
+  readonly at: DataLayout;
   /** Number of steps over all systems. */
   readonly nStepsTotal: number;
-  private readonly pKaAt: number;
-  private readonly dHAt: number;
-  private readonly dCpAt: number;
-  private readonly exponentAt: number;
-  private readonly kaTAt: number;
-  /** Start of the conditional constants in `data`: the Ka′ of step j of system s is data[kcAt + firstStep(s) + j − 1]. */
-  readonly kcAt: number;
   /** Σ z·c of the strong ions, mol/L. */
   readonly strongCharge: number;
   /** ½ Σ z²·c of the strong ions, mol/L. */
@@ -93,16 +83,12 @@ export class ChargeBalanceSolver {
     let m = 0;
     for (let s = 0; s < n; s++) m += systems[s].steps.length;
     this.nStepsTotal = m;
-    this.pKaAt = 4 * n;
-    this.dHAt = this.pKaAt + m;
-    this.dCpAt = this.dHAt + m;
-    this.exponentAt = this.dCpAt + m;
-    this.kaTAt = this.exponentAt + m;
-    this.kcAt = this.kaTAt + m;
+    const at = dataLayout(n, m);
+    this.at = at;
     // A plain array of doubles (NaN until set keeps V8's packed-double kind from the start): on the
     // JS heap, unlike a typed array's separate backing store, and half the time to make.
     const d: number[] = [];
-    for (let i = this.kcAt + m; i > 0; i--) d.push(NaN);
+    for (let i = at.length; i > 0; i--) d.push(NaN);
     this.data = d;
     let pMax = strongCharge;
     let capacity = 0;
@@ -112,17 +98,17 @@ export class ChargeBalanceSolver {
       const C = totals[s];
       const z0 = sys.topCharge;
       const ns = sys.steps.length;
-      d[s] = C;
-      d[n + s] = z0;
-      d[2 * n + s] = ns;
-      d[3 * n + s] = first;
+      d[at.total + s] = C;
+      d[at.topCharge + s] = z0;
+      d[at.stepCount + s] = ns;
+      d[at.firstStep + s] = first;
       for (let j = 0; j < ns; j++) {
         const step = sys.steps[j];
         const i = first + j;
-        d[this.pKaAt + i] = step.pKa;
-        d[this.dHAt + i] = step.dH ?? 0;
-        d[this.dCpAt + i] = step.dCp ?? 0;
-        d[this.exponentAt + i] = z0 - (j + 1);
+        d[at.pKa + i] = step.pKa;
+        d[at.dH + i] = step.dH ?? 0;
+        d[at.dCp + i] = step.dCp ?? 0;
+        d[at.exponent + i] = z0 - (j + 1);
       }
       first += ns;
       pMax += C * z0;
@@ -137,22 +123,22 @@ export class ChargeBalanceSolver {
 
   /** Total mol/L of system s. */
   total(s: number): number {
-    return this.data[s];
+    return this.data[this.at.total + s];
   }
 
   /** z0 of system s: the charge of its fully protonated form. */
   topChargeOf(s: number): number {
-    return this.data[this.nSys + s];
+    return this.data[this.at.topCharge + s];
   }
 
   /** Number of pKa steps of system s. */
   stepCount(s: number): number {
-    return this.data[2 * this.nSys + s];
+    return this.data[this.at.stepCount + s];
   }
 
-  /** Index in `data` of the conditional Ka′ of the first step of system s (the others follow). */
-  kcIndex(s: number): number {
-    return this.kcAt + this.data[3 * this.nSys + s];
+  /** The conditional (concentration) Ka′ of step k (1-based) of system s, at the current T and I. */
+  conditionalKa(s: number, k: number): number {
+    return this.data[this.at.kc + this.data[this.at.firstStep + s] + k - 1];
   }
 
   /** Sets Kw, A and every thermodynamic Ka for a temperature in °C (cached). */
@@ -160,8 +146,9 @@ export class ChargeBalanceSolver {
     if (temperatureC === this.temperatureC) return;
     const T = temperatureC + ZERO_CELSIUS_K;
     const d = this.data;
+    const at = this.at;
     for (let i = 0; i < this.nStepsTotal; i++) {
-      d[this.kaTAt + i] = Math.exp(-LN10 * pKaAtTemperature(d[this.pKaAt + i], d[this.dHAt + i], d[this.dCpAt + i], T));
+      d[at.kaT + i] = Math.exp(-LN10 * pKaAtTemperature(d[at.pKa + i], d[at.dH + i], d[at.dCp + i], T));
     }
     this.kwT = kw(temperatureC);
     this.debyeA = debyeHuckelA(temperatureC);
@@ -175,7 +162,8 @@ export class ChargeBalanceSolver {
     this.lnGamma1 = g;
     const twoG = 2 * g;
     const d = this.data;
-    for (let i = 0; i < this.nStepsTotal; i++) d[this.kcAt + i] = d[this.kaTAt + i] * Math.exp(twoG * d[this.exponentAt + i]);
+    const { kc, kaT, exponent } = this.at;
+    for (let i = 0; i < this.nStepsTotal; i++) d[kc + i] = d[kaT + i] * Math.exp(twoG * d[exponent + i]);
     this.kwc = this.kwT * Math.exp(-twoG);
   }
 
@@ -199,12 +187,13 @@ export class ChargeBalanceSolver {
     let abs = h + oh + this.strongAbs;
     const d = this.data;
     const nSys = this.nSys;
+    const { total, topCharge, stepCount, firstStep, kc } = this.at;
     for (let s = 0; s < nSys; s++) {
-      const C = d[s];
+      const C = d[total + s];
       if (C === 0) continue;
-      const z0 = d[nSys + s];
-      const n = d[2 * nSys + s];
-      const o = this.kcAt + d[3 * nSys + s];
+      const z0 = d[topCharge + s];
+      const n = d[stepCount + s];
+      const o = kc + d[firstStep + s];
       let t = 1;
       let s0 = 1;
       let sz = z0;
