@@ -1,0 +1,198 @@
+/**
+ * Part (f) of `npm run bench`: what-if tables in one formula (src/functions/rowwise.ts) and the
+ * streamed `protolyte table` (src/cli/table.ts). Measured side by side in one run, CPU time:
+ *
+ *   f1  a 10 000-row table as ONE formula =AQ.PH(names, A2:B10001) against the 10 000-row sheet of
+ *       built-in Henderson–Hasselbalch formulas (the sheets take turns; best CPU time of each);
+ *       target: ≤ 0.5× the Henderson–Hasselbalch sheet;
+ *   f2  the one-formula table from 1 000 to 200 000 rows: CPU time per row; target: flat (the
+ *       largest per-row cost within 1.3× the smallest);
+ *   f3  `protolyte table` (the compiled command line, a child process) from 1 000 to 1 000 000 rows:
+ *       CPU time per row beyond the cost of starting (a file with no rows), and peak memory (the
+ *       child's maximum resident set, from /usr/bin/time); targets: flat, and 1 000 000 rows within 300 MB;
+ *   f4  1 000 000 rows with --workers 2 against one thread: wall time, CPU time, speed-up.
+ * Child processes are timed by /usr/bin/time (user + system CPU seconds, maximum resident set).
+ */
+import { spawnSync } from "node:child_process";
+import { closeSync, existsSync, mkdtempSync, openSync, rmSync, writeSync } from "node:fs";
+import { cpus, loadavg, tmpdir } from "node:os";
+import { join } from "node:path";
+import { evaluateSheets } from "../src/cli/evaluate";
+import { clearMixtureCache } from "../src/functions/mixture";
+
+type Raw = (string | number | null)[][];
+
+function cpuNow(): number {
+  const u = process.cpuUsage();
+  return (u.user + u.system) / 1e6;
+}
+
+function print(header: string[], rows: string[][]): void {
+  const widths = header.map((h, c) => Math.max(h.length, ...rows.map((r) => (r[c] ?? "").length)));
+  const line = (cells: string[]) => cells.map((x, c) => (c === 0 ? x.padEnd(widths[c]!) : x.padStart(widths[c]!))).join("  ");
+  console.log(line(header));
+  console.log(widths.map((w) => "-".repeat(w)).join("  "));
+  for (const r of rows) console.log(line(r));
+}
+
+const us = (seconds: number, rows: number): string => `${((seconds / rows) * 1e6).toFixed(2)} µs`;
+const verdict = (ok: boolean): string => (ok ? "met" : "NOT met");
+
+/** Row i: acetic acid and sodium acetate, mol/L (the grid of part b). */
+function amountsOf(i: number): [number, number] {
+  return [0.01 + (i % 100) * 0.001, 0.01 + (Math.floor(i / 100) % 100) * 0.001];
+}
+
+/** Data in A1:B<rows>, names in E1:F1, and either one table formula in C1 or a formula per row. */
+function sheetOf(rows: number, perRow: ((r: number) => string) | null): Raw {
+  const sheet: Raw = [];
+  for (let i = 0; i < rows; i++) {
+    const [a, b] = amountsOf(i);
+    const r = i + 1;
+    const c = perRow !== null ? perRow(r) : i === 0 ? `=AQ.PH(E1:F1,A1:B${rows})` : null;
+    sheet.push(i === 0 ? [a, b, c, null, "acetic acid", "sodium acetate"] : [a, b, c]);
+  }
+  return sheet;
+}
+
+function sheetCpu(sheet: Raw): { cpu: number; errors: number } {
+  clearMixtureCache();
+  const t0 = cpuNow();
+  const [result] = evaluateSheets({ Sheet1: sheet as never });
+  return { cpu: cpuNow() - t0, errors: result!.errors.length };
+}
+
+function f1(quick: boolean): void {
+  const N = 10_000;
+  console.log(`\n(f1) ${N.toLocaleString("en-US")}-row what-if table as one formula vs the Henderson–Hasselbalch sheet (HyperFormula, evaluateSheets; sheets take turns)`);
+  const sheets: [string, Raw][] = [
+    ["=4.756+LOG10(B1/A1) per row  (built-ins: baseline)", sheetOf(N, (r) => `=4.756+LOG10(B${r}/A${r})`)],
+    ["=AQ.PH(E1:F1,A1:B10000)  one formula, spilled", sheetOf(N, null)],
+    ["=AQ.PH($E$1:$F$1,A1:B1) per row  (for comparison)", sheetOf(N, (r) => `=AQ.PH($E$1:$F$1,A${r}:B${r})`)],
+  ];
+  for (const [, s] of sheets) sheetCpu(s.slice(0, 2000)); // warm-up
+  const best = sheets.map(() => Infinity);
+  for (let round = 0; round < (quick ? 3 : 5); round++) {
+    sheets.forEach(([label, s], k) => {
+      const t = sheetCpu(s);
+      if (t.errors > 0) throw new Error(`bench: ${label}: ${t.errors} error cells`);
+      best[k] = Math.min(best[k]!, t.cpu);
+    });
+  }
+  print(
+    ["sheet", "CPU time", "per row", "× baseline"],
+    sheets.map(([label], k) => [label, `${(best[k]! * 1000).toFixed(0)} ms`, us(best[k]!, N), (best[k]! / best[0]!).toFixed(2)]),
+  );
+  const ratio = best[1]! / best[0]!;
+  console.log(`    target: one-formula table ≤ 0.5× the Henderson–Hasselbalch sheet: ${verdict(ratio <= 0.5)} (${ratio.toFixed(2)}×)`);
+}
+
+function f2(quick: boolean): void {
+  const sizes = quick ? [1_000, 10_000, 50_000] : [1_000, 10_000, 50_000, 200_000];
+  console.log("\n(f2) One-formula table in the sheet: CPU time per row against the number of rows (best of 3; 1 run at 200 000)");
+  const per: number[] = [];
+  for (const n of sizes) {
+    const s = sheetOf(n, null);
+    let best = Infinity;
+    for (let r = 0; r < (n >= 200_000 ? 1 : 3); r++) best = Math.min(best, sheetCpu(s).cpu);
+    per.push(best / n);
+  }
+  print(["rows", ...sizes.map((n) => n.toLocaleString("en-US"))], [["CPU per row", ...per.map((p) => `${(p * 1e6).toFixed(2)} µs`)]]);
+  // The smallest table pays the engine's fixed cost over few rows: flatness is judged from 10 000 rows.
+  const judged = per.slice(1);
+  const spread = Math.max(...judged) / Math.min(...judged);
+  console.log(`    target: flat from 10 000 rows up (largest per-row cost within 1.3× the smallest): ${verdict(spread <= 1.3)} (${spread.toFixed(2)}×)`);
+}
+
+/** Writes a CSV of n rows (temperature varies too). */
+function csvOf(path: string, n: number): void {
+  const fd = openSync(path, "w");
+  writeSync(fd, "acetic acid,sodium acetate,temperature\n");
+  let buf = "";
+  for (let i = 0; i < n; i++) {
+    const [a, b] = amountsOf(i);
+    buf += `${a.toFixed(3)},${b.toFixed(3)},${5 + (i % 60)}\n`;
+    if (buf.length > 1 << 20) {
+      writeSync(fd, buf);
+      buf = "";
+    }
+  }
+  writeSync(fd, buf);
+  closeSync(fd);
+}
+
+interface ChildRun {
+  cpu: number;
+  wall: number;
+  maxRssMB: number;
+}
+
+function timed(cli: string, args: string[]): ChildRun {
+  const r = spawnSync("/usr/bin/time", ["-f", "%U %S %M %e", process.execPath, cli, ...args], { encoding: "utf8", maxBuffer: 64 << 20 });
+  const last = r.stderr.trim().split("\n").pop() ?? "";
+  const [u, s, m, e] = last.split(" ").map(Number);
+  if (r.status !== 0 || !Number.isFinite(u)) throw new Error(`bench: protolyte ${args.join(" ")} failed: ${r.stderr.slice(0, 400)}`);
+  return { cpu: u! + s!, wall: e!, maxRssMB: (m! * 1024) / 1e6 };
+}
+
+function f3f4(root: string, quick: boolean): void {
+  const cli = join(root, "dist", "cli", "protolyte.js");
+  if (!existsSync(cli)) {
+    console.log("\n(f3) dist/cli/protolyte.js is missing: run without --no-build (or npm run build)");
+    return;
+  }
+  const dir = mkdtempSync(join(tmpdir(), "protolyte-bench-"));
+  try {
+    const sizes = quick ? [1_000, 10_000, 100_000] : [1_000, 10_000, 100_000, 1_000_000];
+    console.log("\n(f3) protolyte table AQ.PH FILE.csv --out OUT.csv (compiled, a child process; /usr/bin/time): CPU per row beyond start-up, peak memory");
+    csvOf(join(dir, "0.csv"), 0);
+    const out = join(dir, "out.csv");
+    let start = Infinity;
+    for (let r = 0; r < 3; r++) start = Math.min(start, timed(cli, ["table", "AQ.PH", join(dir, "0.csv"), "--out", out]).cpu);
+    // Per row: the CPU time added by the rows since the previous size (start-up and its jitter cancel).
+    let before = { n: 0, cpu: start };
+    const runs = sizes.map((n) => {
+      const file = join(dir, `${n}.csv`);
+      csvOf(file, n);
+      const t = timed(cli, ["table", "AQ.PH", file, "--out", out]);
+      const perRow = Math.max(0, t.cpu - before.cpu) / (n - before.n);
+      before = { n, cpu: t.cpu };
+      return { n, ...t, perRow };
+    });
+    print(
+      ["rows", "CPU", "per added row", "wall", "peak memory"],
+      runs.map((r) => [r.n.toLocaleString("en-US"), `${r.cpu.toFixed(2)} s`, us(r.perRow, 1), `${r.wall.toFixed(2)} s`, `${r.maxRssMB.toFixed(0)} MB`]),
+    );
+    console.log(`    start-up (a file with no rows): ${start.toFixed(2)} s CPU; per added row = (CPU − CPU of the previous size) / rows added`);
+    const judged = runs.filter((r) => r.n >= 10_000).map((r) => r.perRow);
+    const spread = Math.max(...judged) / Math.min(...judged);
+    console.log(`    target: cost per row flat from 10 000 rows up (within 1.3×): ${verdict(spread <= 1.3)} (${spread.toFixed(2)}×)`);
+    const largest = runs[runs.length - 1]!;
+    console.log(`    target: ${largest.n.toLocaleString("en-US")} rows within 300 MB peak: ${verdict(largest.maxRssMB <= 300)} (${largest.maxRssMB.toFixed(0)} MB)`);
+
+    const n = largest.n;
+    console.log(`\n(f4) ${n.toLocaleString("en-US")} rows, one thread against --workers 2 (${cpus().length} logical cores; load ${loadavg()[0]!.toFixed(2)} at start: wall times depend on it)`);
+    const file = join(dir, `${n}.csv`);
+    const one = timed(cli, ["table", "AQ.PH", file, "--out", out]);
+    const two = timed(cli, ["table", "AQ.PH", file, "--out", out, "--workers", "2"]);
+    print(
+      ["mode", "wall", "CPU", "peak memory"],
+      [
+        ["one thread", `${one.wall.toFixed(2)} s`, `${one.cpu.toFixed(2)} s`, `${one.maxRssMB.toFixed(0)} MB`],
+        ["--workers 2", `${two.wall.toFixed(2)} s`, `${two.cpu.toFixed(2)} s`, `${two.maxRssMB.toFixed(0)} MB`],
+      ],
+    );
+    console.log(`    speed-up (wall, one thread / --workers 2): ${(one.wall / two.wall).toFixed(2)}×; load average now ${loadavg()[0]!.toFixed(2)}`);
+  } finally {
+    rmSync(dir, { recursive: true, force: true });
+  }
+}
+
+export function partF(root: string, quick: boolean): void {
+  f1(quick);
+  f2(quick);
+  f3f4(root, quick);
+}
+
+// A part can be run alone: npx tsx scripts/bench-tables.ts [--quick]
+if (require.main === module) partF(join(__dirname, ".."), process.argv.includes("--quick"));
