@@ -106,6 +106,11 @@ describe.each([
     const grid = rowOf(cells, "total (mol/L)");
     for (let r = grid + 1; r <= grid + 3; r++) for (let c = 3; c <= 5; c++) expect(numberAt(result, r, c)).toBeGreaterThan(5);
   });
+
+  test("the what-if grid written as one row-wise formula per column spills the same values", () => {
+    const { cells, result } = get();
+    expect(result.values[rowOf(cells, "same as the grid of section 10?")][1]).toBe("yes");
+  });
 });
 
 describe("demo content", () => {
