@@ -20,7 +20,7 @@ export type { ParseResult, ImportResult, ImportCode } from "./io";
 export { pKbToPKa, PKW_25C } from "./pkb";
 export type { PkbResult } from "./pkb";
 export * from "./storage";
-export { describeProvenance, formatSource } from "./provenance";
+export { describeProvenance, formatSource, reviseValue } from "./provenance";
 export { takenBy, nameClaims } from "./claims";
 export type { NameClaim } from "./claims";
 export { nameCharacterProblem } from "./validate/name-chars";

@@ -7,8 +7,11 @@
 export const LIBRARY_FORMAT = "protolyte-library";
 export const SCHEMA_VERSION = 1;
 
-/** How a value is known. */
-export type ValueStatus = "published" | "common-practice" | "unverified";
+/**
+ * How a value is known. "entered": typed by a user with no citation checked (the status a value
+ * takes when it changes without a new source and locator; never used by the built-in data).
+ */
+export type ValueStatus = "published" | "common-practice" | "unverified" | "entered";
 
 /** A number with its unit, conditions and provenance. */
 export interface ValueRecord {

@@ -3,7 +3,7 @@
  * everything else about a record is checked by the library's validator when the layer is saved.
  * Pure: no DOM, no storage.
  */
-import { pKbToPKa, PKW_25C } from "../library";
+import { pKbToPKa, PKW_25C, reviseValue } from "../library";
 import type { SourceRecord, StepRecord, SubstanceRecord, SystemRecord, ValueRecord } from "../library";
 import { readNumber, STATUS_LABEL } from "./forms";
 import type { Built, FieldIssue, SourceInput, SubstanceInput, SystemInput, ValueInput } from "./forms";
@@ -18,26 +18,49 @@ function setIf<T extends object, K extends keyof T>(target: T, key: K, value: T[
   if (value !== undefined && value !== "") target[key] = value as T[K];
 }
 
-/** A value record from its fields; `optional` values with an empty number are left out. */
-export function buildValue(input: ValueInput, unit: string, path: string, issues: FieldIssue[], optional: boolean, override?: { value: number; note: string }): ValueRecord | undefined {
+/** The note of a pKb conversion (derived: recomputed on every save, never typed). */
+const PKB_NOTE = /(^|;\s*)converted from pKb [^;]*/g;
+
+/**
+ * A value record from its fields; `optional` values with an empty number are left out. A value
+ * opened from a stored record (`input.origin`) that changed loses the old provenance it did not
+ * renew (the library's rule, reviseValue); what was dropped is added to `notes`.
+ */
+export function buildValue(input: ValueInput, unit: string, path: string, issues: FieldIssue[], optional: boolean, override?: { value: number; note: string }, notes: string[] = []): ValueRecord | undefined {
   if (input.value.trim() === "" && optional) return undefined;
   const n = override ? override.value : readNumber(input.value);
   if (n === null) {
-    issues.push({ path: `${path}.value`, message: input.value.trim() === "" ? "a number is needed" : `'${input.value}' is not a number` });
+    issues.push({ path: `${path}.value`, message: numberProblem(input.value) });
     return undefined;
   }
-  const record: ValueRecord = { value: n, unit, conditions: input.conditions.trim(), status: input.status };
-  if (input.status === "published" && input.source.trim() === "") {
-    issues.push({ path: `${path}.source`, message: "a published value names its source: choose one (add it under 'Source' first), or mark the value 'common practice' or 'from memory, unverified'" });
+  const typedNote = input.note.replace(PKB_NOTE, "").replace(/^;\s*/, "").trim();
+  const originNote = input.origin?.note?.replace(PKB_NOTE, "").replace(/^;\s*/, "").trim();
+  const draft: ValueRecord = { value: n, unit, conditions: input.conditions.trim(), status: input.status };
+  setIf(draft, "source", input.source.trim());
+  setIf(draft, "locator", input.locator.trim());
+  setIf(draft, "note", typedNote);
+  const origin = input.origin ? { ...input.origin, note: originNote || undefined } : undefined;
+  if (origin && origin.note === undefined) delete origin.note;
+  const { record, reset } = reviseValue(origin, draft);
+  if (reset) notes.push(`${path.replace(/\.(pKa|dH|dCp|molarMass)$/, "")} ${reset}`.replace(/^steps\[(\d+)\]/, (_, i) => `step ${Number(i) + 1}`));
+  if (record.status === "published" && record.source === undefined) {
+    issues.push({ path: `${path}.source`, message: "a published value names its source: choose one (add it under 'Source' first — this draft is kept), or choose 'entered by the user'" });
   }
-  if (input.status !== "published" && input.note.trim() === "" && !override) {
-    issues.push({ path: `${path}.note`, message: `a '${STATUS_LABEL[input.status]}' value says why in a note` });
+  if ((record.status === "common-practice" || record.status === "unverified") && record.note === undefined && !override) {
+    issues.push({ path: `${path}.note`, message: `a '${STATUS_LABEL[record.status]}' value says why in a note` });
   }
-  setIf(record, "source", input.source.trim());
-  setIf(record, "locator", input.locator.trim());
-  const note = [input.note.trim(), override?.note ?? ""].filter((s) => s !== "").join("; ");
-  setIf(record, "note", note);
+  const note = [record.note ?? "", override?.note ?? ""].filter((s) => s !== "").join("; ");
+  if (note) record.note = note;
+  else delete record.note;
   return record;
+}
+
+/** Why a number field's text is not read as a number. */
+export function numberProblem(text: string): string {
+  const t = text.trim();
+  if (t === "") return "a number is needed";
+  if (/^[-+\u2212]?\d*,\d+$/.test(t)) return `'${text}' uses a decimal comma: write it with a point ('${t.replace(",", ".")}')`;
+  return `'${text}' is not a number`;
 }
 
 /** "pKa = pKw − pKb = 13.995 − 4.75 = 9.245", or null when the text is not a number. */
@@ -68,10 +91,10 @@ export function buildSystem(input: SystemInput): Built<SystemRecord> {
         }
       }
     }
-    const pKa = buildValue(s.pKa, "1", `${p}.pKa`, issues, false, override);
+    const pKa = buildValue(s.pKa, "1", `${p}.pKa`, issues, false, override, notes);
     const step: StepRecord = { pKa: pKa as ValueRecord };
-    const dH = buildValue(s.dH, "kJ/mol", `${p}.dH`, issues, true);
-    const dCp = buildValue(s.dCp, "J/(K·mol)", `${p}.dCp`, issues, true);
+    const dH = buildValue(s.dH, "kJ/mol", `${p}.dH`, issues, true, undefined, notes);
+    const dCp = buildValue(s.dCp, "J/(K·mol)", `${p}.dCp`, issues, true, undefined, notes);
     if (dH) step.dH = dH;
     if (dCp) step.dCp = dCp;
     return step;
@@ -86,13 +109,14 @@ export function buildSystem(input: SystemInput): Built<SystemRecord> {
 
 export function buildSubstance(input: SubstanceInput): Built<SubstanceRecord> {
   const issues: FieldIssue[] = [];
+  const notes: string[] = [];
   const record: SubstanceRecord = { id: input.id, name: input.name.trim(), nature: input.nature };
   const aliases = lines(input.aliases);
   if (aliases.length) record.aliases = aliases;
   setIf(record, "formula", input.formula.trim());
   if (input.formula.trim() !== "" && !input.formulaAlias) record.formulaAlias = false;
   if (input.formula.trim() === "" || input.molarMass.value.trim() !== "") {
-    const mm = buildValue(input.molarMass, "g/mol", "molarMass", issues, input.formula.trim() !== "");
+    const mm = buildValue(input.molarMass, "g/mol", "molarMass", issues, input.formula.trim() !== "", undefined, notes);
     if (input.formula.trim() === "" && input.molarMass.value.trim() === "") {
       issues.splice(issues.length - 1, 1, { path: "molarMass.value", message: "give a formula (the molar mass is computed from it) or a molar mass" });
     }
@@ -133,7 +157,7 @@ export function buildSubstance(input: SubstanceInput): Built<SubstanceRecord> {
     }
   }
   setIf(record, "note", input.note.trim());
-  return issues.length ? { ok: false, issues } : { ok: true, record, notes: [] };
+  return issues.length ? { ok: false, issues } : { ok: true, record, notes };
 }
 
 export function buildSource(input: SourceInput): Built<SourceRecord> {

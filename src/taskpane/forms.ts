@@ -4,7 +4,7 @@
  * record-to-form.ts, ids from names entry-id.ts.
  */
 import { readDecimal } from "../chem";
-import type { PhysicalState, SourceRecord, SubstanceNature, ValueStatus } from "../library";
+import type { PhysicalState, SourceRecord, SubstanceNature, ValueRecord, ValueStatus } from "../library";
 
 /** A problem at a field of the entry being edited: path relative to the entry ("steps[0].pKa.value"). */
 export interface FieldIssue {
@@ -19,6 +19,8 @@ export interface ValueInput {
   source: string;
   locator: string;
   note: string;
+  /** The stored record this input was opened from (edit, override, duplicate): a changed value loses its provenance. */
+  origin?: ValueRecord;
 }
 
 export interface StepInput {
@@ -82,13 +84,16 @@ export type Built<T> = { ok: true; record: T; notes: string[] } | { ok: false; i
 export const DEFAULT_CONDITIONS = "25 °C, I = 0";
 
 export const STATUS_LABEL: Record<ValueStatus, string> = {
+  entered: "entered by the user",
   published: "published",
   "common-practice": "common practice",
   unverified: "from memory, unverified",
 };
 
 export function emptyValue(conditions = DEFAULT_CONDITIONS): ValueInput {
-  return { value: "", conditions, status: "published", source: "", locator: "", note: "" };
+  // A new value starts as "entered by the user", which needs nothing absent: a source and locator
+  // make it "published", a note makes it common practice or unverified.
+  return { value: "", conditions, status: "entered", source: "", locator: "", note: "" };
 }
 
 export function emptyStep(): StepInput {

@@ -7,7 +7,7 @@ const num = (n: number | undefined): string => (n === undefined ? "" : String(n)
 
 export function valueToInput(v: ValueRecord | undefined, conditions = DEFAULT_CONDITIONS): ValueInput {
   if (!v) return emptyValue(conditions);
-  return { value: String(v.value), conditions: v.conditions, status: v.status, source: v.source ?? "", locator: v.locator ?? "", note: v.note ?? "" };
+  return { value: String(v.value), conditions: v.conditions, status: v.status, source: v.source ?? "", locator: v.locator ?? "", note: v.note ?? "", origin: v };
 }
 
 export function systemToInput(r: SystemRecord): SystemInput {

@@ -86,3 +86,63 @@ describe("names taken from other substances", () => {
     expect(!r.ok && r.issues.map((i) => [i.path, i.message])).toEqual([["name", expect.stringMatching(/Cyrillic letter 'е' \(U\+0435\)/)]]);
   });
 });
+
+describe("a changed value loses the old value's provenance", () => {
+  test("overriding citrate with pKa 4.761 → 4.80 drops the Goldberg citation and says so", async () => {
+    const { ctl } = await freshController();
+    const d = ctl.duplicateDraft("system", "citrate");
+    if (d?.kind !== "system") throw new Error("no draft");
+    const old = d.input.steps[1].pKa.value;
+    d.input.steps[1].pKa.value = "4.80";
+    const r = await ctl.saveSystem(d.layer, d.input, d.originalId);
+    expect(r.ok).toBe(true);
+    expect(r.ok && r.notes.join(" ")).toContain(`step 2 ${old} → 4.8: the old value's source 'goldberg2002'`);
+    const steps = (ctl.library.get("citrate", "system")!.record as SystemRecord).steps;
+    expect(steps[1].pKa).toEqual({ value: 4.8, unit: "1", conditions: "25 °C, I = 0", status: "entered" });
+    // the unchanged steps keep their citation
+    expect(steps[0].pKa).toMatchObject({ status: "published", source: "goldberg2002" });
+  });
+
+  test("an amine entered by pKb and edited to pKa 8.00 no longer says it was converted", async () => {
+    const { ctl } = await freshController();
+    await ctl.saveSystem("workbook", baseSystemByPkb("4.2"));
+    const d = ctl.editDraft("system", "hb-7-amine");
+    if (d?.kind !== "system") throw new Error("no draft");
+    expect(d.input.steps[0].pKa.note).toContain("converted from pKb 4.2");
+    d.input.steps[0].pKa.value = "8.00";
+    expect((await ctl.saveSystem(d.layer, d.input, d.originalId)).ok).toBe(true);
+    const pKa = (ctl.library.get("hb-7-amine", "system")!.record as SystemRecord).steps[0].pKa;
+    expect(pKa).toEqual({ value: 8, unit: "1", conditions: "25 °C, I = 0", status: "entered" });
+  });
+
+  test("re-entered as pKb 5.2, the conversion note is recomputed, not stacked", async () => {
+    const { ctl } = await freshController();
+    await ctl.saveSystem("workbook", baseSystemByPkb("4.2"));
+    const d = ctl.editDraft("system", "hb-7-amine");
+    if (d?.kind !== "system") throw new Error("no draft");
+    d.input.steps[0].enteredAsPkb = true;
+    d.input.steps[0].pKa.value = "5.2";
+    expect((await ctl.saveSystem(d.layer, d.input, d.originalId)).ok).toBe(true);
+    const pKa = (ctl.library.get("hb-7-amine", "system")!.record as SystemRecord).steps[0].pKa;
+    expect(pKa.value).toBeCloseTo(8.795, 9);
+    expect(pKa.status).toBe("entered");
+    expect(pKa.note).toMatch(/^converted from pKb 5\.2 with pKw 13\.995/);
+    expect(pKa.note).not.toContain("4.2");
+  });
+
+  test("a new value starts as 'entered by the user', so a first save needs no source", async () => {
+    const { ctl } = await freshController();
+    const s = baseSystemByPkb("4.2");
+    s.steps[0].pKa.status = "entered";
+    s.steps[0].pKa.note = "";
+    expect((await ctl.saveSystem("workbook", s)).ok).toBe(true);
+  });
+
+  test("a decimal comma is refused with the reason", async () => {
+    const { ctl } = await freshController();
+    const s = baseSystemByPkb("4,2");
+    s.steps[0].enteredAsPkb = false;
+    const r = await ctl.saveSystem("workbook", s);
+    expect(!r.ok && r.issues).toEqual([{ path: "steps[0].pKa.value", message: "'4,2' uses a decimal comma: write it with a point ('4.2')" }]);
+  });
+});

@@ -197,6 +197,12 @@ export class BrowseView {
           del.focus();
         });
         confirmBox.appendChild(el("div", { class: "actions" }, yes, no));
+        confirmBox.addEventListener("keydown", (e) => {
+          if (e.key !== "Escape") return;
+          e.preventDefault();
+          confirmBox.remove();
+          del.focus();
+        });
         bar.after(confirmBox);
         yes.focus();
       }, { class: "danger", "aria-label": `Delete ${name}` });

@@ -19,6 +19,8 @@ export class EditorView {
   private readonly form = el("form", { id: "editor-form", novalidate: true, "aria-labelledby": "editor-title" });
   private readonly summary = el("div", { id: "editor-errors", tabindex: "-1" });
   private targetLayer: UserLayer = "workbook";
+  /** New-entry drafts by kind: switching "What to add" (to add the source a value needs) loses nothing. */
+  private readonly drafts = new Map<NewKind, EditDraft>();
 
   constructor(
     private readonly root: HTMLElement,
@@ -67,7 +69,9 @@ export class EditorView {
         ["substance", "Substance form (what is weighed)"],
         ["source", "Source (a citation)"],
       ], (v) => {
-        this.draft = this.fresh(v);
+        this.drafts.set(d.kind, d);
+        this.draft = this.drafts.get(v) ?? this.fresh(v);
+        this.draft.layer = this.targetLayer;
         this.render();
       });
       kind.id = "add-kind";
@@ -120,6 +124,8 @@ export class EditorView {
     if (!r.ok) {
       this.showIssues(r.issues);
       replaceChildren(this.summary, resultMessage(r));
+      this.status(resultMessage(r)); // a "Saved" line from before must not stay up beside a failure
+      this.summary.scrollIntoView({ block: "start" });
       this.summary.focus();
       announce(r.message);
       return;
@@ -130,10 +136,17 @@ export class EditorView {
       const name = d.input.name;
       box.appendChild(el("div", { class: "actions" }, button(`Add a substance form of '${name}'`, () => this.newSubstanceOf(id, name))));
     }
-    this.draft = this.fresh(d.kind, d.layer);
+    this.drafts.delete(d.kind);
+    // Back to a waiting draft of another kind (a value that needed this source), else a fresh form.
+    const waiting = d.kind === "source" && d.originalId === null ? [...this.drafts.values()][0] : undefined;
+    this.draft = waiting ?? this.fresh(d.kind, d.layer);
+    if (waiting) this.drafts.delete(waiting.kind);
     this.render();
+    if (waiting) box.appendChild(el("p", {}, `Back to the ${waiting.kind === "system" ? "acid–base system" : "substance form"} you were adding: the new source can now be chosen.`));
     replaceChildren(this.summary, box);
     this.status(resultMessage(r));
+    this.summary.scrollIntoView({ block: "start" });
+    this.summary.focus();
     announce(r.message);
   }
 

@@ -33,6 +33,6 @@ export function valueFields(library: Library, v: ValueInput, path: string, legen
     extra ?? null,
     el("div", { class: "row" }, field("Status", status, { path: `${path}.status` }).wrap, field("Source", source, { path: `${path}.source` }).wrap),
     el("div", { class: "row" }, field("Where in the source", textInput(v.locator, (x) => (v.locator = x), { placeholder: "Table 2" }), { path: `${path}.locator` }).wrap, field("Note", textInput(v.note, (x) => (v.note = x)), { path: `${path}.note` }).wrap),
-    el("p", { class: "hint" }, "A published value names its source; a common-practice or unverified one says why in the note."),
+    el("p", { class: "hint" }, "A published value names its source; a common-practice or unverified one says why in the note; a value entered by the user needs neither. A changed value loses the old citation unless you give a new source and locator."),
   );
 }
