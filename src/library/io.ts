@@ -64,7 +64,7 @@ export function parseLibraryText(text: string, context: readonly LibraryDoc[] = 
   return v.ok ? { ok: true, library: v.doc } : v;
 }
 
-const ORDER = ["format", "schemaVersion", "name", "version", "description", "sources", "atomicWeights", "systems", "ions", "substances"] as const;
+const ORDER = ["format", "schemaVersion", "name", "version", "description", "exported", "pin", "sources", "atomicWeights", "systems", "ions", "substances", "changes"] as const;
 
 /** The text of a library file: fixed section order, two-space indentation, final newline. */
 export function exportLibraryText(doc: LibraryDoc): string {
@@ -73,7 +73,7 @@ export function exportLibraryText(doc: LibraryDoc): string {
   return `${JSON.stringify(ordered, null, 2)}\n`;
 }
 
-/** `incoming` entries added to `base`, replacing entries with the same id. */
+/** `incoming` entries added to `base`, replacing entries with the same id; `base` keeps its pin and change record. */
 export function mergeLibraryDocs(base: LibraryDoc | null, incoming: LibraryDoc): LibraryDoc {
   if (!base) return incoming;
   const byId = <T extends { id: string }>(a: T[] = [], b: T[] = []): T[] | undefined => {
@@ -94,6 +94,8 @@ export function mergeLibraryDocs(base: LibraryDoc | null, incoming: LibraryDoc):
     systems: byId(base.systems, incoming.systems),
     ions: byId(base.ions, incoming.ions),
     substances: byId(base.substances, incoming.substances),
+    pin: base.pin ?? incoming.pin,
+    changes: base.changes,
   };
   return JSON.parse(JSON.stringify(merged)) as LibraryDoc;
 }

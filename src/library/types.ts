@@ -94,6 +94,44 @@ export interface SubstanceRecord {
   note?: string;
 }
 
+export interface EntryRef {
+  kind: EntryKind;
+  id: string;
+}
+
+/** When, from which constants and by which software a file was exported. Not kept in a layer. */
+export interface ExportStamp {
+  at: string;
+  fingerprint: string;
+  /** "Protolyte 0.1.0". */
+  software: string;
+  /** What was exported: "workbook library", "constants in effect", "entries the workbook uses". */
+  what?: string;
+}
+
+/** A snapshot of the constants a workbook's formulas use, copied into the workbook library. */
+export interface PinRecord {
+  at: string;
+  builtinVersion: string;
+  /** The fingerprint of the constants in effect right after pinning. */
+  fingerprint?: string;
+  entries: EntryRef[];
+}
+
+export type ChangeAction = "add" | "edit" | "delete" | "import" | "pin" | "copy";
+
+/** One change to a workbook library (the change record): values as JSON text. */
+export interface ChangeRecord {
+  at: string;
+  who: string;
+  action: ChangeAction;
+  entry?: EntryRef;
+  name?: string;
+  summary?: string;
+  diff?: { path: string; old?: string; new?: string }[];
+  reason?: string;
+}
+
 /** A library file (and a layer): our own public format. */
 export interface LibraryDoc {
   format: typeof LIBRARY_FORMAT;
@@ -106,6 +144,9 @@ export interface LibraryDoc {
   systems?: SystemRecord[];
   ions?: IonRecord[];
   substances?: SubstanceRecord[];
+  exported?: ExportStamp;
+  pin?: PinRecord;
+  changes?: ChangeRecord[];
 }
 
 /** One problem a person can act on: "substances[3].aliases[0]: duplicate of 'tris' used by tris-base". */

@@ -15,6 +15,11 @@ import {
   takenBy,
   setLayer,
   validateLibraryDoc,
+  describeStamp,
+  exportFileName,
+  recordOf,
+  stampExport,
+  withoutStamp,
 } from "../library";
 import type { EntryKind, LibraryDoc, SourceRecord, SubstanceRecord, SystemRecord, UserLayer } from "../library";
 import { describeImport, type ImportChange, type ImportMode } from "./import-preview";
@@ -24,7 +29,8 @@ import { buildSource, buildSubstance, buildSystem } from "./form-to-record";
 import type { Built, FieldIssue, SourceInput, SubstanceInput, SystemInput } from "./forms";
 import { entryName, KIND_LABEL, LAYER_LABEL } from "./describe";
 import { clone, LAYER_DOC_NAME, SECTION, tidy } from "./layer-docs";
-import { PaneState, type ActionResult } from "./pane-state";
+import type { ActionResult } from "./pane-state";
+import { WorkbookActions } from "./workbook-actions";
 import { tryMixture, type TryResult, type TryRow } from "./tryit";
 
 export type { ActionResult, StoredProblem } from "./pane-state";
@@ -35,6 +41,8 @@ export interface ImportPreview {
   layer: UserLayer;
   mode: ImportMode;
   fileName: string;
+  /** The file's export stamp in words (fingerprint, date, software), or that it has none. */
+  stamp: string;
   changes: ImportChange[];
   next: LibraryDoc;
 }
@@ -43,7 +51,7 @@ function notSaved(issues: FieldIssue[]): ActionResult {
   return { ok: false, message: `Not saved: ${issues.length} problem${issues.length === 1 ? "" : "s"} to fix.`, issues, other: [] };
 }
 
-export class PaneController extends PaneState {
+export class PaneController extends WorkbookActions {
   pendingImport: ImportPreview | null = null;
 
   private saveRecord(kind: "system" | "substance", layer: UserLayer, built: Built<SystemRecord | SubstanceRecord>, originalId: string | null, name: string, takeOverNames = false): Promise<ActionResult> {
@@ -57,9 +65,12 @@ export class PaneController extends PaneState {
       const list = ((doc[SECTION[kind]] as { id: string }[] | undefined) ?? []).slice();
       const at = list.findIndex((r) => r.id === (originalId ?? record.id));
       const index = at >= 0 ? at : list.length;
+      const before = at >= 0 ? list[at] : this.library.get(record.id, kind)?.record;
       list[index] = record;
       (doc as unknown as Record<string, unknown>)[SECTION[kind]] = list;
-      const r = await this.commit(layer, doc, `${SECTION[kind]}[${index}]`, `Saved '${record.name}' in the ${layer} library.`, built.notes);
+      const over = at < 0 && before ? `overrides the ${LAYER_LABEL[this.library.get(record.id, kind)!.layer]} entry` : undefined;
+      const change = { action: at >= 0 ? "edit" : "add", entry: { kind, id: record.id }, name: record.name, summary: over, before, after: record } as const;
+      const r = await this.commit(layer, doc, `${SECTION[kind]}[${index}]`, `Saved '${record.name}' in the ${layer} library.`, built.notes, change);
       return r.ok ? { ...r, id: record.id } : r;
     });
   }
@@ -96,9 +107,12 @@ export class PaneController extends PaneState {
       const id = originalId ?? (input.id.trim() || makeId(input.title, (k) => this.taken("source", k)));
       if (originalId === null && this.idRefusal("source", id).length) return notSaved(this.idRefusal("source", id));
       const doc = this.layerDoc(layer);
+      const before = doc.sources?.[id] ?? this.library.get(id, "source")?.record;
+      const action = doc.sources?.[id] ? "edit" : "add";
       doc.sources = { ...(doc.sources ?? {}), [id]: built.record as SourceRecord };
       const path = /^[a-z0-9][a-z0-9._-]*$/.test(id) ? `sources.${id}` : `sources[${JSON.stringify(id)}]`;
-      const r = await this.commit(layer, doc, path, `Saved source '${built.record.title}' (${id}) in the ${layer} library.`);
+      const change = { action, entry: { kind: "source", id }, name: built.record.title, before, after: built.record } as const;
+      const r = await this.commit(layer, doc, path, `Saved source '${built.record.title}' (${id}) in the ${layer} library.`, [], change);
       return r.ok ? { ...r, id } : r;
     });
   }
@@ -107,6 +121,7 @@ export class PaneController extends PaneState {
   deleteEntry(layer: UserLayer, kind: EntryKind, id: string): Promise<ActionResult> {
     return this.serial(async () => {
       const doc = this.layerDoc(layer);
+      const before = this.library.layers[layer] ? recordOf(this.library.layers[layer]!, { kind, id }) : undefined;
       let name = id;
       if (kind === "source" || kind === "atomicWeight") {
         const section = kind === "source" ? "sources" : "atomicWeights";
@@ -123,7 +138,8 @@ export class PaneController extends PaneState {
       }
       const below = this.library.get(id, kind)?.overrides ?? [];
       const after = below.length ? ` The ${below[0] === "builtin" ? "built-in" : below[0]} entry applies again.` : "";
-      const r = await this.commit(layer, doc, null, `Deleted '${name}' from the ${layer} library.${after}`);
+      const change = { action: "delete", entry: { kind, id }, name, before } as const;
+      const r = await this.commit(layer, doc, null, `Deleted '${name}' from the ${layer} library.${after}`, [], change);
       if (!r.ok) return { ...r, message: `Not deleted: other entries still use it. ${r.other.join(" ")}`.trim() };
       return r;
     });
@@ -161,11 +177,11 @@ export class PaneController extends PaneState {
     }
     const parsed = parseLibraryText(text, this.contextFor(layer));
     if (!parsed.ok) return fail(`'${fileName}' was not imported (nothing changed): ${parsed.message}`, parsed.errors.map((e) => `${e.path || "(file)"}: ${e.message}`));
-    const next = mode === "merge" ? mergeLibraryDocs(this.library.layers[layer], parsed.library) : clone(parsed.library);
+    const next = withoutStamp(mode === "merge" ? mergeLibraryDocs(this.library.layers[layer], parsed.library) : clone(parsed.library));
     if (mode === "merge") next.name = this.library.layers[layer]?.name ?? LAYER_DOC_NAME[layer];
     const v = validateLibraryDoc(tidy(next), this.contextFor(layer));
     if (!v.ok) return fail(`'${fileName}' was not imported (nothing changed): combined with the ${layer} library it ${v.message}`, v.errors.map((e) => `${e.path || "(file)"}: ${e.message}`));
-    this.pendingImport = { layer, mode, fileName, changes: describeImport(this.library, layer, parsed.library, mode), next };
+    this.pendingImport = { layer, mode, fileName, stamp: describeStamp(parsed.library.exported), changes: describeImport(this.library, layer, parsed.library, mode), next };
     this.changed();
     return { ok: true, preview: this.pendingImport };
   }
@@ -173,7 +189,9 @@ export class PaneController extends PaneState {
   async confirmImport(): Promise<ActionResult> {
     const p = this.pendingImport;
     if (!p) return { ok: false, message: "There is no import waiting for confirmation.", issues: [], other: [] };
-    const r = await this.serial(() => this.commit(p.layer, p.next, null, `Imported '${p.fileName}' into the ${p.layer} library (${p.changes.length} change${p.changes.length === 1 ? "" : "s"}).`));
+    const counted = `${p.changes.length} change${p.changes.length === 1 ? "" : "s"}`;
+    const change = { action: "import", name: p.fileName, summary: `${p.mode === "merge" ? "added to" : "replaced"} the workbook library: ${counted}. ${p.stamp} ${p.changes.map((c) => `${c.name} (${c.id}): ${c.text}`).join("; ")}` } as const;
+    const r = await this.serial(() => this.commit(p.layer, p.next, null, `Imported '${p.fileName}' into the ${p.layer} library (${counted}).`, [], change));
     this.pendingImport = null;
     this.changed();
     return r.ok ? r : { ...r, message: `Import not applied (nothing changed): ${r.message} ${r.other.join(" ")}`.trim() };
@@ -185,11 +203,12 @@ export class PaneController extends PaneState {
   }
 
   /** A library file of one user layer, or of everything in effect. Null for an empty layer. */
-  exportFile(which: UserLayer | "effective"): { fileName: string; text: string } | null {
-    if (which === "effective") return { fileName: "protolyte-constants-in-effect.json", text: exportLibraryText(flattenLibrary(this.library)) };
-    const doc = this.library.layers[which];
+  exportFile(which: UserLayer | "effective", now: Date = new Date()): { fileName: string; text: string } | null {
+    const doc = which === "effective" ? flattenLibrary(this.library) : this.library.layers[which];
     if (!doc) return null;
-    return { fileName: `protolyte-${which}-library.json`, text: exportLibraryText(doc) };
+    const base = which === "effective" ? "protolyte-constants-in-effect" : `protolyte-${which}-library`;
+    const stamped = stampExport(doc, this.library.fingerprint(), which === "effective" ? "constants in effect" : `${which} library`, now);
+    return { fileName: exportFileName(base, stamped.exported!), text: exportLibraryText(stamped) };
   }
 
   /** The unreadable stored text exactly as found, to keep before a reset. */

@@ -12,7 +12,8 @@ export function emptyDoc(layer: UserLayer): LibraryDoc {
 }
 
 export function isEmpty(doc: LibraryDoc): boolean {
-  return !Object.keys(doc.sources ?? {}).length && !Object.keys(doc.atomicWeights ?? {}).length && !doc.systems?.length && !doc.ions?.length && !doc.substances?.length;
+  // A change record or a pin alone is content: deleting every entry must not erase the record of it.
+  return !Object.keys(doc.sources ?? {}).length && !Object.keys(doc.atomicWeights ?? {}).length && !doc.systems?.length && !doc.ions?.length && !doc.substances?.length && !doc.changes?.length && !doc.pin;
 }
 
 /** A deep copy of plain JSON data (library records and layer files are JSON). */

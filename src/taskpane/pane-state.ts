@@ -7,8 +7,8 @@
  * store it → put it in effect (setLayer). If storing fails, nothing is put in effect; if the file is
  * invalid, nothing is stored.
  */
-import { getActiveLibrary, loadLayer, makeBlob, referenceContext, setLayer, validateLibraryDoc } from "../library";
-import type { EntryKind, Library, LibraryDoc, UserLayer, ValidationIssue } from "../library";
+import { getActiveLibrary, loadLayer, makeBlob, makeChange, referenceContext, setLayer, validateLibraryDoc, withChange } from "../library";
+import type { ChangeInput, EntryKind, Library, LibraryDoc, UserLayer, ValidationIssue } from "../library";
 import type { FieldIssue } from "./forms";
 import type { HostInfo } from "./host";
 import { clone, emptyDoc, isEmpty, LAYER_DOC_NAME, tidy } from "./layer-docs";
@@ -29,11 +29,29 @@ export type ActionResult =
 
 type Listener = () => void;
 
+/** What a change to the workbook library records, besides who and when (see the library's change-record.ts). */
+export type ChangeNote = Omit<ChangeInput, "who" | "reason">;
+
+/** Where the name typed for the change record is remembered on this computer. */
+export const USER_NAME_KEY = "protolyte.user-name";
+
+function rememberedName(): string {
+  try {
+    return (globalThis as { localStorage?: Storage }).localStorage?.getItem(USER_NAME_KEY) ?? "";
+  } catch {
+    return "";
+  }
+}
+
 export class PaneState {
   library: Library;
   readonly problems = new Map<UserLayer, StoredProblem>();
   /** Problems met while starting (a failed recalculation), for the status line. */
   readonly startupWarnings: string[] = [];
+  /** The name written into the change record (typed once, remembered on this computer). */
+  userName = rememberedName();
+  /** The reason the user gave for the next change to the workbook library (used once, then cleared). */
+  changeReason = "";
   private readonly listeners = new Set<Listener>();
   private queue: Promise<unknown> = Promise.resolve();
 
@@ -102,11 +120,25 @@ export class PaneState {
     return p ? `The stored ${layer} library could not be read. Export its stored text, then reset it, before saving into it (nothing was changed).` : null;
   }
 
-  /** Validate, store and apply a layer's next file. `entryPath` maps validator paths back to the edited entry's fields. */
-  protected async commit(layer: UserLayer, next: LibraryDoc, entryPath: string | null, done: string, notes: string[] = []): Promise<ActionResult> {
+  /** Remember the name for the change record on this computer. */
+  setUserName(name: string): void {
+    this.userName = name.trim();
+    try {
+      (globalThis as { localStorage?: Storage }).localStorage?.setItem(USER_NAME_KEY, this.userName);
+    } catch {
+      // no browser storage: the name lasts for this session
+    }
+  }
+
+  /**
+   * Validate, store and apply a layer's next file. `entryPath` maps validator paths back to the
+   * edited entry's fields. A change to the workbook library is added to its change record.
+   */
+  protected async commit(layer: UserLayer, next: LibraryDoc, entryPath: string | null, done: string, notes: string[] = [], change?: ChangeNote): Promise<ActionResult> {
     const blocked = this.blocked(layer);
     if (blocked) return { ok: false, message: blocked, issues: [], other: [] };
-    const doc = tidy(next);
+    const recorded = layer === "workbook" && change ? withChange(next, makeChange({ ...change, who: this.userName, reason: this.changeReason })) : next;
+    const doc = tidy(recorded);
     const v = validateLibraryDoc(doc, this.contextFor(layer));
     if (!v.ok) return this.invalid(v.errors, entryPath, layer);
     const before = new Set(this.library.problems.map((p) => `${p.layer}:${p.path}:${p.message}`));
@@ -125,6 +157,7 @@ export class PaneState {
     }
     const applied = setLayer(layer, isEmpty(doc) ? null : doc);
     if (!applied.ok) return this.invalid(applied.errors, entryPath, layer);
+    this.changeReason = "";
     this.changed();
     const warnings = [
       ...storageWarnings,

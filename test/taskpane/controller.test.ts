@@ -94,7 +94,11 @@ describe("built-in entries", () => {
     const back = getActiveLibrary().get("acetate", "system")!;
     expect(back.layer).toBe("builtin");
     expect((back.record as SystemRecord).steps[0].pKa.value).toBe(builtin.steps[0].pKa.value);
-    expect(getActiveLibrary().layers.workbook).toBeNull();
+    // no constants are left in the workbook, only the change record of the override and its deletion
+    const wb = getActiveLibrary().layers.workbook!;
+    expect(wb.systems).toBeUndefined();
+    expect(wb.changes!.map((c) => [c.action, c.entry?.id, c.summary])).toEqual([["add", "acetate", "overrides the built-in entry"], ["delete", "acetate", undefined]]);
+    expect(wb.changes![0].diff).toContainEqual({ path: "steps[0].pKa.value", old: String(builtin.steps[0].pKa.value), new: "4.8" });
   });
 
   test("built-in entries cannot be opened for editing in place", async () => {

@@ -96,7 +96,7 @@ describe("workbook settings and recalculation", () => {
     expect(ctl.stores.workbook.where).toBe("this workbook");
   });
 
-  test("deleting the last entry removes the setting and recalculates", async () => {
+  test("deleting the last entry keeps the change record in the setting and recalculates", async () => {
     const { excel, settings, log } = fakeExcel();
     const ctl = excelController(excel);
     await ctl.init();
@@ -104,9 +104,10 @@ describe("workbook settings and recalculation", () => {
     log.length = 0;
     const r = await ctl.deleteEntry("workbook", "system", "hb-7-amine");
     expect(r.ok).toBe(true);
-    expect(settings.has(WORKBOOK_LIBRARY_KEY)).toBe(false);
-    expect(log).toContain(`settings.delete ${WORKBOOK_LIBRARY_KEY}`);
-    expect(log.indexOf("calculate Full")).toBeGreaterThan(log.indexOf(`settings.delete ${WORKBOOK_LIBRARY_KEY}`));
+    const stored = JSON.parse(String(settings.get(WORKBOOK_LIBRARY_KEY)));
+    expect(stored.library.systems).toBeUndefined();
+    expect(stored.library.changes.map((c: { action: string }) => c.action)).toEqual(["add", "delete"]);
+    expect(log.indexOf("calculate Full")).toBeGreaterThan(log.indexOf(`settings.add ${WORKBOOK_LIBRARY_KEY}`));
   });
 
   test("the workbook layer is loaded from the workbook's settings, then the workbook is recalculated with it", async () => {

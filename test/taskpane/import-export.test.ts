@@ -2,7 +2,7 @@
  * Import and export through the controller: export → import round trip, preview before applying,
  * nothing changed by a cancelled or failed import, the size limit, replace vs merge.
  */
-import { getActiveLibrary, LIBRARY_FORMAT, MAX_LIBRARY_BYTES } from "../../src/library";
+import { getActiveLibrary, LIBRARY_FORMAT, MAX_LIBRARY_BYTES, SOFTWARE_VERSION } from "../../src/library";
 import { baseSubstance, baseSystemByPkb, freshController } from "./helpers";
 
 const file = (doc: unknown) => JSON.stringify(doc);
@@ -18,10 +18,15 @@ async function withBase() {
 describe("export", () => {
   test("a user layer exports as a library file; an empty layer exports nothing", async () => {
     const { ctl } = await withBase();
-    const f = ctl.exportFile("workbook");
-    expect(f?.fileName).toBe("protolyte-workbook-library.json");
+    const f = ctl.exportFile("workbook", new Date("2026-12-02T17:45:12.000Z"));
+    const fp = ctl.library.fingerprint();
+    // the fingerprint, the date and the software version, in the name and in the file
+    expect(f?.fileName).toBe(`protolyte-workbook-library_${fp}_2026-12-02T1745Z.json`);
     const doc = JSON.parse(f!.text);
     expect(doc).toMatchObject({ format: LIBRARY_FORMAT, schemaVersion: 1 });
+    expect(doc.exported).toEqual({ at: "2026-12-02T17:45:12.000Z", fingerprint: fp, software: `Protolyte ${SOFTWARE_VERSION}`, what: "workbook library" });
+    // the change record goes out with it
+    expect(doc.changes.map((c: { action: string; entry: { id: string } }) => [c.action, c.entry.id])).toEqual([["add", "hb-7-amine"], ["add", "hb-7-free-base"]]);
     expect(doc.substances.map((s: { id: string }) => s.id)).toEqual(["hb-7-free-base"]);
     expect(ctl.exportFile("personal")).toBeNull();
   });
