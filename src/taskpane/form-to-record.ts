@@ -3,6 +3,7 @@
  * everything else about a record is checked by the library's validator when the layer is saved.
  * Pure: no DOM, no storage.
  */
+import { parseDecimalComma } from "../chem/number-text";
 import { pKbToPKa, PKW_25C, reviseValue } from "../library";
 import type { SourceRecord, StepRecord, SubstanceRecord, SystemRecord, ValueRecord } from "../library";
 import { readNumber, STATUS_LABEL } from "./forms";
@@ -59,7 +60,8 @@ export function buildValue(input: ValueInput, unit: string, path: string, issues
 export function numberProblem(text: string): string {
   const t = text.trim();
   if (t === "") return "a number is needed";
-  if (/^[-+\u2212]?\d*,\d+$/.test(t)) return `'${text}' uses a decimal comma: write it with a point ('${t.replace(",", ".")}')`;
+  const comma = t.includes(",") ? parseDecimalComma(t) : null;
+  if (comma !== null) return `'${text}' uses a decimal comma: write it with a point ('${comma}')`;
   return `'${text}' is not a number`;
 }
 
