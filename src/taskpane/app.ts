@@ -32,11 +32,12 @@ export function startApp(ctl: PaneController, opts: AppOptions = {}): void {
     },
     status,
   });
-  const files = new FilesView(byId("panel-files"), ctl, status);
   const tryView = new TryView(byId("panel-try"), ctl);
+  const files = new FilesView(byId("panel-files"), ctl, status, () => tryView.mixture().rows.map((r) => r.name.trim()).filter((n) => n !== ""));
   const picture = new PictureView(byId("panel-picture"), ctl, { tryMixture: () => tryView.mixture(), excel: opts.excel ?? null });
   showTab = setupTabs(byId("tabs"), (panel) => {
     replaceChildren(statusBox);
+    if (panel === "panel-files") files.render(); // the pin offers the Try it names as they are now
     if (panel === "panel-picture") picture.show();
     else picture.hide();
   });

@@ -194,13 +194,17 @@ describe("task pane in Chromium with office.js from the npm copy", () => {
     await page.selectOption("#kind-filter", "all");
   });
 
-  test("exports the workbook library as a file", async () => {
+  test("exports the workbook library as a file stamped with fingerprint, date and version, in the file and its name", async () => {
+    const fp = await page.locator("#fingerprint").innerText();
     await tab(page, "Files");
     const [download] = await Promise.all([page.waitForEvent("download"), page.click("#export-workbook")]);
-    expect(download.suggestedFilename()).toBe("protolyte-workbook-library.json");
+    expect(download.suggestedFilename()).toMatch(new RegExp(`^protolyte-workbook-library_${fp}_\\d{4}-\\d{2}-\\d{2}T\\d{4}Z\\.json$`));
     exported = fs.readFileSync((await download.path()) as string, "utf8");
     const doc = JSON.parse(exported);
     expect(doc.format).toBe("protolyte-library");
+    expect(doc.exported).toMatchObject({ fingerprint: fp, software: expect.stringMatching(/^Protolyte \d+\.\d+\.\d+$/), what: "workbook library" });
+    // the change record travels with the export
+    expect(doc.changes.map((c: { action: string }) => c.action)).toContain("add");
     expect(doc.substances.map((s: { id: string }) => s.id)).toEqual(["hb-7-free-base"]);
     expect(doc.systems.map((s: { id: string }) => s.id)).toEqual(["hb-7-amine"]);
   });
@@ -217,6 +221,8 @@ describe("task pane in Chromium with office.js from the npm copy", () => {
     await chooseFile(page, "halvorsen-lab.json", exported);
     // the file is read asynchronously: wait for its preview (reading at once races a busy machine)
     const preview = await waitForText(page.locator("#import-preview"), /2 changes/);
+    // the export stamp is shown before anything is applied
+    expect(preview).toMatch(/Exported \d{4}-\d{2}-\d{2} \d{2}:\d{2} UTC by Protolyte \d+\.\d+\.\d+ \(workbook library\), constants fingerprint PL-/);
     expect(preview).toMatch(/HB-7 amine \(hb-7-amine\): replaces the workbook acid–base system/);
     expect(preview).toMatch(/HB-7 free base \(hb-7-free-base\): adds a new substance/);
     expect(await page.locator("#fingerprint").innerText()).toBe(fingerprintBefore); // nothing applied yet

@@ -177,6 +177,13 @@ export class BrowseView {
         if (d) this.hooks.edit(d);
       }, { "aria-label": `${label.replace("…", "")}: ${name}` }));
     }
+    if (entry.layer === "personal" && entry.kind !== "atomicWeight") {
+      bar.appendChild(button("Copy into the workbook", async () => {
+        const r = await this.ctl.copyToWorkbook(entry.kind, entry.id);
+        this.hooks.status(resultMessage(r));
+        announce(r.message);
+      }, { "aria-label": `Copy into the workbook: ${name}` }));
+    }
     if (entry.layer !== "builtin") {
       const layer = entry.layer;
       const del = button("Delete…", () => {
@@ -185,6 +192,11 @@ export class BrowseView {
           { class: "msg warn", role: "group", "aria-label": "Confirm delete" },
           el("p", {}, `Delete '${name}' from the ${layer} library?${entry.overrides.length ? " The entry it overrides applies again." : ""}`),
         );
+        if (layer === "workbook") {
+          const why = el("input", { type: "text", id: "delete-reason", autocomplete: "off" }) as HTMLInputElement;
+          why.addEventListener("input", () => (this.ctl.changeReason = why.value));
+          confirmBox.appendChild(el("div", { class: "field" }, el("label", { for: "delete-reason" }, "Reason (for the change record, optional)"), why));
+        }
         const yes = button("Delete", async () => {
           const r = await this.ctl.deleteEntry(layer, entry.kind, entry.id);
           this.hooks.status(resultMessage(r));

@@ -10,7 +10,7 @@ import type { EditDraft, PaneController } from "../controller";
 import { emptySource, emptySubstance, emptySystem } from "../forms";
 import type { FieldIssue, SubstanceInput, SystemInput, SourceInput } from "../forms";
 import { sourceFields, substanceFields, systemFields, type FieldsContext } from "./entry-fields";
-import { button, field, message, resultMessage, select } from "./ui";
+import { button, field, message, resultMessage, select, textInput } from "./ui";
 
 type NewKind = "system" | "substance" | "source";
 
@@ -84,6 +84,8 @@ export class EditorView {
       ], (v) => {
         this.targetLayer = v;
         this.draft.layer = v;
+        const r = this.form.querySelector<HTMLElement>("#change-reason")?.closest<HTMLElement>(".field");
+        if (r) r.hidden = v !== "workbook";
       });
       layer.id = "target-layer";
       top.push(field("Save into", layer, { hint: `The workbook library (${this.ctl.stores.workbook.where}) travels with the workbook; the personal library (${this.ctl.stores.personal.where}) stays on this computer.` }).wrap);
@@ -96,12 +98,16 @@ export class EditorView {
     }
     const ctx: FieldsContext = { library: this.ctl.library, editing, render: () => this.render(), form: this.form };
     const body = d.kind === "system" ? systemFields(ctx, d.input) : d.kind === "substance" ? substanceFields(ctx, d.input) : sourceFields(ctx, d.input);
+    const reason = field("Reason (for the workbook's change record)", textInput(this.ctl.changeReason, (v) => (this.ctl.changeReason = v), { id: "change-reason" }), {
+      hint: "Optional; recorded with who and when when this is saved in the workbook library.",
+    }).wrap;
+    reason.hidden = d.layer !== "workbook";
     const save = el("button", { type: "submit", class: "primary", id: "editor-save" }, editing ? "Save changes" : "Save");
     const cancel = button(editing ? "Cancel editing" : "Clear", () => {
       this.draft = this.fresh(d.kind);
       this.render();
     });
-    replaceChildren(this.form, ...body, el("div", { class: "actions" }, save, cancel));
+    replaceChildren(this.form, ...body, reason, el("div", { class: "actions" }, save, cancel));
     replaceChildren(this.root, ...top, this.summary, this.form);
     replaceChildren(this.summary);
   }

@@ -9,6 +9,7 @@ import { el, replaceChildren, announce } from "../dom";
 import type { PaneController } from "../controller";
 import type { ImportMode } from "../import-preview";
 import { button, download, field, message, resultMessage, select } from "./ui";
+import { workbookSection } from "./workbook";
 
 export class FilesView {
   private layer: UserLayer = "workbook";
@@ -22,6 +23,8 @@ export class FilesView {
     private readonly root: HTMLElement,
     private readonly ctl: PaneController,
     private readonly status: (node: HTMLElement) => void,
+    /** Substance names to offer for pinning (the Try it mixture). */
+    private readonly names: () => string[] = () => [],
   ) {
     this.file.addEventListener("change", () => void this.chosen());
   }
@@ -53,6 +56,7 @@ export class FilesView {
       field("Library file", this.file, { hint: `A Protolyte library file (.json), at most ${(MAX_LIBRARY_BYTES / 1048576).toFixed(0)} MB. You will see what it changes before anything is applied.` }).wrap,
       this.outcome,
       this.preview,
+      workbookSection(this.ctl, this.names, this.status),
     );
     this.renderPreview();
   }
@@ -108,6 +112,7 @@ export class FilesView {
         "div",
         { class: "msg warn", role: "group", "aria-labelledby": "import-preview-title" },
         el("p", { id: "import-preview-title" }, `'${p.fileName}' → ${p.layer} library (${p.mode === "merge" ? "added to it" : "replacing it"}): ${p.changes.length} change${p.changes.length === 1 ? "" : "s"}. Nothing is applied until you confirm.`),
+        el("p", { id: "import-stamp" }, p.stamp),
         el("ul", { class: "changes", "aria-label": "Changes" }, ...p.changes.map((c) => el("li", { "data-action": c.action }, el("strong", {}, c.name), ` (${c.id}): ${c.text}`))),
         el("div", { class: "actions" }, apply, cancel),
       ),
