@@ -7,7 +7,9 @@
 import { buildSync } from "esbuild";
 import path from "node:path";
 
-const LIBRARY_BUDGET_BYTES = 120 * 1024;
+// 120 KB until the verified data (sources, temperature data, new substances) grew it to about
+// 120 KB on its own; the change record, pin and export stamp (about 8 KB) are the library's job too.
+const LIBRARY_BUDGET_BYTES = 136 * 1024;
 
 const bundle = (entry: string) =>
   buildSync({

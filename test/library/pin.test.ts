@@ -82,6 +82,11 @@ describe("change record", () => {
 });
 
 describe("export stamp", () => {
+  test("the software version is package.json's", () => {
+    // eslint-disable-next-line @typescript-eslint/no-require-imports
+    expect(SOFTWARE_NAME).toBe(`Protolyte ${(require("../../package.json") as { version: string }).version}`);
+  });
+
   test("the file and its name carry the fingerprint, the date and the software version; an import reads them back", () => {
     const lib = createLibrary({ builtin: BUILTIN_LIBRARY });
     const doc = stampExport({ format: "protolyte-library", schemaVersion: 1, name: "w" }, lib.fingerprint(), "workbook library", AT);
