@@ -6,7 +6,8 @@ export { adjust, ADJUST_PH_TOLERANCE, type AdjustOptions, type AdjustExcess, typ
 export { capacity, STRONG_BASE, STRONG_ACID, type CapacityValue, type CapacityResult } from "./capacity";
 export { curve, CURVE_POINTS_DEFAULT, CURVE_POINTS_MIN, CURVE_POINTS_MAX, type CurveRequest, type CurvePoint, type CurveValue, type CurveResult } from "./curve";
 export { EQUIVALENCE_PROMINENCE, type EquivalencePoint } from "./equivalence";
-export { phRange, PHRANGE_MAX_EXHAUSTIVE, PHRANGE_MAX_QUANTITIES, type PHRangeOptions, type PHRangeValue, type PHRangeResult } from "./ph-range";
+export { phRange, statisticalBand, PHRANGE_COVERAGE_K, PHRANGE_MAX_EXHAUSTIVE, PHRANGE_MAX_QUANTITIES, type PHRangeOptions, type PHRangeValue, type PHRangeResult, type StatisticalBand } from "./ph-range";
+export { phRangeOverTemperature, PHRANGE_MAX_TEMPERATURES, type PHRangeOverTemperatureValue } from "./ph-range-temperature";
 export type { Quantity as PHRangeQuantity } from "./ph-range-model";
 export type { BoxPoint as PHRangePoint } from "./ph-range-search";
 export { recipe, RECIPE_I_TOLERANCE, type RecipeRequest, type RecipeLine, type RecipeValue, type RecipeResult } from "./recipe";

@@ -23,6 +23,11 @@
  *   from inside (the true band may be wider), which is why it is flagged.
  * - The linearised band pH₀ ± Σ|∂pH/∂qᵢ|·Δqᵢ (central differences at the nominal point, step 1e-4
  *   of each half-width) is returned too, for comparison; it is never the answer.
+ * - Beside the worst case, a statistical band after the ISO Guide to the expression of uncertainty
+ *   in measurement (GUM, JCGM 100:2008, §5.1.2 linear propagation, §4.3.7 rectangular distribution):
+ *   each varied quantity uniform over its interval, u(qᵢ) = half-width/√3, uncorrelated, so
+ *   u(pH)² = Σ (∂pH/∂qᵢ)²·u(qᵢ)², reported as pH₀ ± k·u with k = 2 (about 95 % for a near-normal
+ *   result). Same derivatives as the linearised band.
  */
 import { fail } from "../failure";
 import type { ChemOptions, Mixture, Result } from "../types";
@@ -54,7 +59,30 @@ export interface PHRangeValue {
   lowAt: BoxPoint;
   highAt: BoxPoint;
   linear: { low: number; high: number };
+  /** GUM band: pH₀ ± k·u, u from linear propagation of rectangular standard uncertainties. */
+  statistical: StatisticalBand;
   evaluations: number;
+}
+
+export interface StatisticalBand {
+  low: number;
+  high: number;
+  /** Combined standard uncertainty of the pH. */
+  u: number;
+  /** Coverage factor. */
+  k: number;
+  method: string;
+}
+
+/** Coverage factor of the statistical band. */
+export const PHRANGE_COVERAGE_K = 2;
+export const PHRANGE_STATISTICAL_METHOD = "GUM linear propagation, rectangular distributions (u = half-width/√3), k = 2";
+
+/** The GUM band around pH₀ from a sum of squared (derivative × half-width) terms. */
+export function statisticalBand(nominal: number, sumSquaresOfHalfWidthEffects: number): StatisticalBand {
+  const u = Math.sqrt(sumSquaresOfHalfWidthEffects / 3);
+  const k = PHRANGE_COVERAGE_K;
+  return { low: nominal - k * u, high: nominal + k * u, u, k, method: PHRANGE_STATISTICAL_METHOD };
 }
 
 export type PHRangeResult = Result<PHRangeValue>;
@@ -88,8 +116,9 @@ function checkInputs(mix: Mixture, tolerances: number | readonly number[], opts:
 }
 
 /** Linearised band and the derivative signs at the nominal point. */
-function linearise(box: BoxPH, nominal: number): { low: number; high: number; signs: number[] } | ReturnType<typeof fail> {
+function linearise(box: BoxPH, nominal: number): { low: number; high: number; signs: number[]; sumSq: number } | ReturnType<typeof fail> {
   let spread = 0;
+  let sumSq = 0;
   const signs: number[] = [];
   const x0 = box.nominal;
   for (let i = 0; i < box.qs.length; i++) {
@@ -109,8 +138,9 @@ function linearise(box: BoxPH, nominal: number): { low: number; high: number; si
     if (!Number.isFinite(d)) return fail("no-convergence", `The pH derivative with respect to ${q.label} is not finite; no result is given.`);
     signs.push(d >= 0 ? 1 : -1);
     spread += Math.abs(d) * half;
+    sumSq += d * half * (d * half);
   }
-  return { low: nominal - spread, high: nominal + spread, signs };
+  return { low: nominal - spread, high: nominal + spread, signs, sumSq };
 }
 
 /** Lowest and highest pH over the tolerance box (worst case), with the linearised band for comparison. */
@@ -147,7 +177,7 @@ export function phRange(mix: Mixture, tolerances: number | readonly number[], op
   const lin = linearise(box, nom.value);
   if (!("signs" in lin)) return lin;
   if (qs.length === 0) {
-    return { ok: true, low: nom.value, high: nom.value, nominal: nom.value, method: "none", exhaustive: true, mixture: merged, quantities: qs, lowAt: nominalPoint, highAt: nominalPoint, linear: { low: lin.low, high: lin.high }, evaluations: box.evaluations };
+    return { ok: true, low: nom.value, high: nom.value, nominal: nom.value, method: "none", exhaustive: true, mixture: merged, quantities: qs, lowAt: nominalPoint, highAt: nominalPoint, linear: { low: lin.low, high: lin.high }, statistical: statisticalBand(nom.value, lin.sumSq), evaluations: box.evaluations };
   }
   const exhaustive = qs.length <= (opts.maxExhaustive ?? PHRANGE_MAX_EXHAUSTIVE);
   let lowStart: BoxPoint;
@@ -188,6 +218,7 @@ export function phRange(mix: Mixture, tolerances: number | readonly number[], op
     lowAt: low.pH <= nom.value ? low : nominalPoint,
     highAt: high.pH >= nom.value ? high : nominalPoint,
     linear: { low: lin.low, high: lin.high },
+    statistical: statisticalBand(nom.value, lin.sumSq),
     evaluations: box.evaluations,
   };
 }
