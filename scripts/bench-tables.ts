@@ -10,7 +10,8 @@
  *   f3  `protolyte table` (the compiled command line, a child process) from 1 000 to 1 000 000 rows:
  *       CPU time per row beyond the cost of starting (a file with no rows), and peak memory (the
  *       child's maximum resident set, from /usr/bin/time); targets: flat, and 1 000 000 rows within 300 MB;
- *   f4  1 000 000 rows with --workers 2 against one thread: wall time, CPU time, speed-up.
+ *   f4  1 000 000 rows with --workers 2 against one thread: wall time, CPU time, speed-up;
+ *   f5  (printed first) a probe of the neighbour warm start: solver evaluations per row, cold and warm.
  * Child processes are timed by /usr/bin/time (user + system CPU seconds, maximum resident set).
  */
 import { spawnSync } from "node:child_process";
@@ -18,7 +19,10 @@ import { closeSync, existsSync, mkdtempSync, openSync, rmSync, writeSync } from 
 import { cpus, loadavg, tmpdir } from "node:os";
 import { join } from "node:path";
 import { evaluateSheets } from "../src/cli/evaluate";
+import { prepare } from "../src/chem";
+import { solveCoupled } from "../src/chem/ionic-strength-iteration";
 import { clearMixtureCache } from "../src/functions/mixture";
+import { getActiveLibrary } from "../src/library";
 
 type Raw = (string | number | null)[][];
 
@@ -188,7 +192,58 @@ function f3f4(root: string, quick: boolean): void {
   }
 }
 
+/**
+ * f5, a probe for the neighbour warm start (issue 19, item 2): the charge-balance evaluations per row
+ * of a 10 000-row acetate grid solved cold (the product's path) and with the first solve started from
+ * the previous row's ln[H⁺]; a count, so independent of the machine's load. Reaches into the solver
+ * (not an API): it measures whether the change would be worth making.
+ */
+export function f5(): void {
+  const lib = getActiveLibrary();
+  const comp = (n: string) => {
+    const r = lib.resolve(n);
+    if (!r.ok) throw new Error(`bench: ${n}`);
+    return r.component;
+  };
+  const [acid, salt] = [comp("acetic acid"), comp("sodium acetate")];
+  const N = 10_000;
+  type Core = { evaluations: number; x: number; lnGamma1: number; setTemperature(t: number): void; solveLnH(x: number): boolean };
+  const cores = Array.from({ length: N }, (_, i) => {
+    const [a, b] = amountsOf(i);
+    return (prepare([{ component: acid, conc: a }, { component: salt, conc: b }]) as unknown as { core: Core }).core;
+  });
+  const solve = (core: Core, start: number): number => {
+    core.setTemperature(25);
+    const own = core.solveLnH.bind(core);
+    let first = true;
+    core.solveLnH = (x: number) => {
+      const from = first ? start : x;
+      first = false;
+      return own(from);
+    };
+    solveCoupled(core as never, "davies");
+    core.solveLnH = own;
+    return -(core.x + core.lnGamma1) / Math.LN10;
+  };
+  let cold = 0;
+  let warm = 0;
+  let largest = 0;
+  let previous = NaN;
+  for (const core of cores) {
+    const pH = solve(core, NaN);
+    cold += core.evaluations;
+    const x = core.x;
+    const pHWarm = solve(core, previous);
+    warm += core.evaluations;
+    largest = Math.max(largest, Math.abs(pHWarm - pH));
+    previous = x;
+  }
+  console.log(`\n(f5) Neighbour warm start, probe: charge-balance evaluations per row, ${N.toLocaleString("en-US")}-row acetate grid, Davies, 25 °C`);
+  console.log(`    cold (as shipped) ${(cold / N).toFixed(2)}; from the previous row's ln[H+] ${(warm / N).toFixed(2)} (${((1 - warm / cold) * 100).toFixed(0)} % fewer); largest pH difference ${largest.toExponential(1)}`);
+}
+
 export function partF(root: string, quick: boolean): void {
+  f5();
   f1(quick);
   f2(quick);
   f3f4(root, quick);
