@@ -20,16 +20,21 @@ export interface ParsedCsv {
   separator: string;
 }
 
+const GUESS = [",", ";", "\t", "|"];
+
 /** Splits CSV text into rows of fields. `separator`: one character, or undefined to detect it. */
 export function parseCsvText(text: string, separator?: string): ParsedCsv {
   const body = text.charCodeAt(0) === 0xfeff ? text.slice(1) : text;
-  const result = Papa.parse<string[]>(body, { delimiter: separator ?? "", delimitersToGuess: [",", ";", "\t", "|"], skipEmptyLines: false });
+  // Detection looks at the first rows without the empty ones (an empty row has one field under any
+  // separator and would spoil papaparse's count); the file is then read with every row in place.
+  const delimiter = separator ?? (Papa.parse<string[]>(body, { preview: 50, skipEmptyLines: "greedy", delimitersToGuess: GUESS }).meta.delimiter || ",");
+  const result = Papa.parse<string[]>(body, { delimiter, skipEmptyLines: false });
   const broken = result.errors.find((e) => e.type === "Quotes");
   if (broken) throw new CsvError(`CSV: ${broken.message.toLowerCase()} (row ${(broken.row ?? 0) + 1})`);
   const rows = result.data;
   // A final line end gives one empty field after it: not a row.
   while (rows.length > 0 && rows[rows.length - 1]!.length === 1 && rows[rows.length - 1]![0] === "") rows.pop();
-  return { rows, separator: result.meta.delimiter || separator || "," };
+  return { rows, separator: delimiter };
 }
 
 /** Rows of fields (comma-separated unless another separator is detected). */
