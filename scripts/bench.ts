@@ -8,10 +8,11 @@
  *       built-in functions (the comparison baseline only; the engine never uses that shortcut);
  *   (c) AQ.ADJUST and AQ.RECIPE calls per second;
  *   (d) production bundle sizes, raw and gzip (builds first unless --no-build);
- *   (e) the batching pattern for Excel, simulated, against synchronous calls.
+ *   (e) the batching pattern for Excel, simulated, against synchronous calls;
  *   (f) what-if tables in one formula and the streamed `protolyte table` (scripts/bench-tables.ts).
+ *   (g) the command line\'s start-up: one eval against Node loading HyperFormula (scripts/bench-startup.ts).
  *
- * Options: --only=a,b,c,d,e   run some parts; --no-build   read dist/ as it is; --quick   shorter runs.
+ * Options: --only=a,b,c,d,e,f,g   run some parts; --no-build   read dist/ as it is; --quick   shorter runs.
  * Timings depend on the machine and its load: the header prints the machine and the load average;
  * every figure is the best of several timed runs after a warm-up, in CPU time of this process (see
  * now()). Not a test: nothing here asserts a speed.
@@ -28,11 +29,12 @@ import { installEdgeIndex, uninstallEdgeIndex } from "../src/cli/hf-edge-index";
 import * as AQ from "../src/functions/functions";
 import { clearMixtureCache, mixtureKey } from "../src/functions/mixture";
 import { getActiveLibrary } from "../src/library";
+import { partStartup } from "./bench-startup";
 import { partF } from "./bench-tables";
 
 const root = join(__dirname, "..");
 const argv = process.argv.slice(2);
-const only = (argv.find((a) => a.startsWith("--only="))?.slice(7).split(",") ?? ["a", "b", "c", "d", "e", "f"]).map((s) => s.trim());
+const only = (argv.find((a) => a.startsWith("--only="))?.slice(7).split(",") ?? ["a", "b", "c", "d", "e", "f", "g"]).map((s) => s.trim());
 const quick = argv.includes("--quick");
 const build = !argv.includes("--no-build");
 const RUNS = quick ? 3 : 9;
@@ -509,12 +511,20 @@ async function partE(): Promise<void> {
 
 // ---- main ----------------------------------------------------------------------------------
 
-const parts: Record<string, () => void | Promise<void>> = { a: partA, b: partB, c: partC, d: partD, e: partE, f: () => partF(root, quick) };
+const parts: Record<string, () => void | Promise<void>> = {
+  a: partA,
+  b: partB,
+  c: partC,
+  d: partD,
+  e: partE,
+  f: () => partF(root, quick),
+  g: () => partStartup(root, quick ? 3 : 7, table),
+};
 
 async function main(): Promise<void> {
   for (const p of only) {
     const run = parts[p];
-    if (run === undefined) throw new Error(`bench: unknown part '${p}' (use a, b, c, d, e, f)`);
+    if (run === undefined) throw new Error(`bench: unknown part '${p}' (use a, b, c, d, e, f, g)`);
     await run();
   }
   if (Number.isNaN(sink)) console.log("(a result was NaN)");

@@ -31,7 +31,10 @@ function runDemo() {
     return;
   }
   banner("Protolyte demo sheet, evaluated headlessly (examples/demo.csv)");
-  const r = spawnSync(bin("tsx"), [join(root, "src", "cli", "main.ts"), "sheet", demo], { stdio: "inherit", cwd: root });
+  // The compiled command line when it is built (npm run build), else the sources through tsx.
+  const compiled = join(root, "dist", "cli", "protolyte.js");
+  const [command, first] = existsSync(compiled) ? [process.execPath, compiled] : [bin("tsx"), join(root, "src", "cli", "bin.ts")];
+  const r = spawnSync(command, [first, "sheet", demo], { stdio: "inherit", cwd: root });
   if (r.status !== 0) process.stdout.write(`(the headless demo exited with status ${r.status})\n`);
 }
 
@@ -42,10 +45,21 @@ function haveCerts() {
 function ensureCerts() {
   if (haveCerts()) return true;
   banner("Creating development certificates (office-addin-dev-certs)");
-  spawnSync(bin("office-addin-dev-certs"), ["install", "--days", "365"], { stdio: "inherit", cwd: root });
+  const r = spawnSync(bin("office-addin-dev-certs"), ["install", "--days", "365"], { encoding: "utf8", cwd: root });
   // The tool writes the files first and then asks the system to trust its CA (needs sudo/admin);
-  // when that second step fails the files are still usable.
-  return haveCerts();
+  // when that second step fails the files are still usable: say so calmly instead of its bare "Error:".
+  const said = `${r.stdout ?? ""}${r.stderr ?? ""}`;
+  if (haveCerts()) {
+    if (/sudo|permission|EACCES|Error/i.test(said)) {
+      process.stdout.write(
+        `Certificates written to ${certDir}. Trusting their CA needs sudo, which this machine does not give: that is expected here, ` +
+          "and it only means the machine running Excel must trust ca.crt itself (import it into its trust store).\n",
+      );
+    }
+    return true;
+  }
+  process.stdout.write(said);
+  return false;
 }
 
 function explainMissingCerts() {
