@@ -43,6 +43,19 @@ function nodeModulesExternal({ request }, callback) {
   return callback();
 }
 
+/** Marks an emitted file executable, so the package's `bin` runs it (`npx protolyte`). */
+class ExecutablePlugin {
+  constructor(file) {
+    this.file = file;
+  }
+  apply(compiler) {
+    compiler.hooks.afterEmit.tap("ExecutablePlugin", (compilation) => {
+      const file = path.join(compilation.outputOptions.path, this.file);
+      if (fs.existsSync(file)) fs.chmodSync(file, 0o755);
+    });
+  }
+}
+
 function cliConfig(production) {
   return {
     name: "cli",
@@ -64,7 +77,7 @@ function cliConfig(production) {
     },
     optimization: { minimize: false },
     performance: { hints: false },
-    plugins: [new webpack.BannerPlugin({ banner: "#!/usr/bin/env node", raw: true, entryOnly: true })],
+    plugins: [new webpack.BannerPlugin({ banner: "#!/usr/bin/env node", raw: true, entryOnly: true }), new ExecutablePlugin("protolyte.js")],
     node: { __dirname: false, __filename: false },
     mode: production ? "production" : "development",
   };

@@ -157,3 +157,12 @@ test("CSV output never turns computed text into a live formula", () => {
   const { toCsv } = require("../../src/cli/csv") as typeof import("../../src/cli/csv");
   expect(toCsv([["=1+1", "+SUM(A1)", "@x", "-y", "plain", -0.5]])).toBe("\ufeff'=1+1,'+SUM(A1),'@x,'-y,plain,-0.5\r\n");
 });
+
+test("the compiled command line is executable, as the package's bin runs it", () => {
+  const { statSync } = require("node:fs") as typeof import("node:fs");
+  const { compiled } = require("./support/run") as typeof import("./support/run");
+  const pkg = JSON.parse(readFileSync(join(root, "package.json"), "utf8")) as { bin: Record<string, string> };
+  expect(join(root, pkg.bin.protolyte!)).toBe(compiled);
+  expect(statSync(compiled).mode & 0o111).toBe(0o111);
+  expect(readFileSync(compiled, "utf8").startsWith("#!/usr/bin/env node\n")).toBe(true);
+});
