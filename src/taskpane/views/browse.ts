@@ -136,6 +136,9 @@ export class BrowseView {
     const note = (entry.record as { note?: string }).note;
     if (note && entry.kind !== "atomicWeight") facts.push(["note", note]);
     const values = valuesOf(entry, sources);
+    // Each distinct provenance once, numbered; the values point to it (phosphate's nine values share a few).
+    const provs = [...new Set(values.map((v) => v.provenance).filter((p) => p !== ""))];
+    const ref = (p: string): string => (provs.length > 1 ? ` [${provs.indexOf(p) + 1}]` : "");
     replaceChildren(
       body,
       el("dl", { class: "facts" }, ...facts.flatMap(([k, v]) => [el("dt", {}, k), el("dd", {}, v)])),
@@ -151,10 +154,13 @@ export class BrowseView {
                 el("span", { class: "amount" }, v.amount),
                 el("span", {}, ` (${v.conditions})`),
                 el("span", { class: `badge ${v.flagged ? "flag" : "layer-builtin"}` }, v.statusText),
-                el("span", { class: "prov" }, `${v.status === "published" ? "Source" : "Provenance"}: ${v.provenance}`),
+                v.provenance ? el("span", { class: "ref" }, ref(v.provenance)) : null,
               ),
             ),
           )
+        : null,
+      provs.length
+        ? el("ol", { class: "values prov-list", "aria-label": "Sources and provenance" }, ...provs.map((p) => el("li", { class: "prov" }, provs.length > 1 ? `[${provs.indexOf(p) + 1}] ${p}` : `Source: ${p}`)))
         : null,
       this.actions(entry),
     );
