@@ -268,7 +268,7 @@ export function CURVE(
  * @param amounts Nominal concentrations, mol/L (or unit text), same shape as names.
  * @param amount_tolerance Relative tolerance on every amount (0.02 for ±2 %), or a range of tolerances of the same shape as names.
  * @param [pKa_uncertainty] ± uncertainty applied to every pKa, pH units. Default 0.
- * @param [temperature] Temperature, °C (0–100). Default 25.
+ * @param [temperature] Temperature, °C (0–100), default 25; or two cells for a range (2 and 8 for storage at 2–8 °C), searched as part of the worst case.
  * @returns A table with a header row: low pH, high pH, method (an exhaustive worst case over all corners, or a flagged bounded search beyond 12 varied quantities).
  */
 export function PHRANGE(names: any[][], amounts: any[][], amount_tolerance: any, pKa_uncertainty?: any, temperature?: any): any[][] {

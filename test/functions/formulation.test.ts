@@ -125,3 +125,23 @@ describe("AQ.OSMOLALITY", () => {
     ['=AQ.OSMOLALITY("NaCl",3)', "#N/A", /ionic strength/],
   ])("%s is %s", (formula, error, message) => expectError(formula, error, message));
 });
+
+describe("AQ.PHRANGE over a temperature range", () => {
+  test("Tris stored at 2–8 °C: the band holds the band at 2 °C and at 8 °C, and the pH at each end fed back", () => {
+    const over = table('=AQ.PHRANGE({"Tris";"HCl"},{0.05;0.025},0.02,0.01,{2,8})');
+    const at2 = table('=AQ.PHRANGE({"Tris";"HCl"},{0.05;0.025},0.02,0.01,2)');
+    const at8 = table('=AQ.PHRANGE({"Tris";"HCl"},{0.05;0.025},0.02,0.01,8)');
+    expect(over[1][0] as number).toBeLessThanOrEqual(Math.min(at2[1][0] as number, at8[1][0] as number));
+    expect(over[1][1] as number).toBeGreaterThanOrEqual(Math.max(at2[1][1] as number, at8[1][1] as number));
+    expect(over[1][2]).toMatch(/temperatures from 2 to 8 °C/);
+    for (const t of [2, 8]) {
+      const pH = num(`=AQ.PH({"Tris";"HCl"},{0.05;0.025},${t})`);
+      expect(pH).toBeGreaterThan(over[1][0] as number);
+      expect(pH).toBeLessThan(over[1][1] as number);
+    }
+  });
+
+  test("three temperature cells are #VALUE!", () => {
+    expectError('=AQ.PHRANGE({"Tris";"HCl"},{0.05;0.025},0.02,0,{2,5,8})', "#VALUE!", /give one temperature, or two for a range/);
+  });
+});

@@ -7,7 +7,7 @@
  * amount_tolerance is one relative tolerance for every amount (0.02 or "2 %") or a range of the same
  * shape as names (blank names are skipped, as in names/amounts).
  */
-import { phRange as phRangeOf, PHRANGE_MAX_EXHAUSTIVE, type PHRangeValue } from "../../chem/workflows";
+import { phRange as phRangeOf, phRangeOverTemperature, PHRANGE_MAX_EXHAUSTIVE, type PHRangeValue } from "../../chem/workflows";
 import { cellsOf, isBlank, plainNumber, position, shapeOf, type Cell } from "../args";
 import { badInput, finite, orThrow } from "../errors";
 import { readMixtureArgs } from "../mixture";
@@ -47,10 +47,26 @@ function methodText(r: PHRangeValue): string {
   return `bounded local search, not exhaustive (${k} varied quantities > ${PHRANGE_MAX_EXHAUSTIVE}): the true band may be wider`;
 }
 
+/** Two temperature cells (a storage range such as 2 and 8 °C), or null for one temperature. */
+function temperatureRange(temperature: Cell): [number, number] | null {
+  if (!Array.isArray(temperature)) return null;
+  const cells = cellsOf(temperature).filter((c) => !isBlank(c.value));
+  if (cells.length <= 1) return null;
+  if (cells.length > 2) throw badInput(`temperature is ${cells.length} cells: give one temperature, or two for a range (such as 2 and 8 °C)`);
+  return [chemOptions(cells[0].value).temperatureC, chemOptions(cells[1].value).temperatureC];
+}
+
 export function phRange(names: Cell, amounts: Cell, amountTolerance: Cell, pKaUncertainty: Cell, temperature: Cell): unknown[][] {
   const { mixture } = readMixtureArgs(names, amounts);
   const tol = tolerances(names, amountTolerance);
   const u = plainNumber(pKaUncertainty, "pKa_uncertainty", 0);
-  const r = orThrow(phRangeOf(mixture, tol, { ...chemOptions(temperature), pKaUncertainty: u }));
+  const range = temperatureRange(temperature);
+  if (range !== null) {
+    const r = orThrow(phRangeOverTemperature(mixture, tol, range, { pKaUncertainty: u }));
+    const over = `${methodText(r)}, at each of ${r.temperatures.length} temperatures from ${r.temperatureRange[0]} to ${r.temperatureRange[1]} °C`;
+    return [PHRANGE_HEADER, [finite(r.low, "low pH"), finite(r.high, "high pH"), over]];
+  }
+  const single = Array.isArray(temperature) ? cellsOf(temperature).find((c) => !isBlank(c.value))?.value ?? null : temperature;
+  const r = orThrow(phRangeOf(mixture, tol, { ...chemOptions(single), pKaUncertainty: u }));
   return [PHRANGE_HEADER, [finite(r.low, "low pH"), finite(r.high, "high pH"), methodText(r)]];
 }
