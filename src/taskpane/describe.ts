@@ -128,14 +128,22 @@ const KIND_ORDER: readonly EntryKind[] = ["substance", "system", "ion", "source"
 const LAYER_FIRST: readonly LayerName[] = [...LAYER_ORDER].reverse();
 
 /**
- * Entries whose text contains every word of the query (case-insensitive), substances first, then
- * systems, ions, sources and atomic weights; within a kind, the user's own entries come first.
+ * Entries whose text contains every word of the query (case-insensitive): exact names first, then
+ * names that start with the query, then the rest; within each, substances, systems, ions, sources
+ * and atomic weights, and the user's own entries before built-in ones.
  */
 export function filterEntries(entries: readonly MergedEntry[], query: string, kind: EntryKind | "all", layer: LayerName | "all" = "all"): MergedEntry[] {
   const words = query.toLowerCase().split(/\s+/).filter((w) => w !== "");
+  const q = words.join(" ");
+  // 0: the query is a name (id, name or alias) exactly; 1: a name starts with it; 2: it is found elsewhere
+  const rankOf = (e: MergedEntry): number => {
+    if (q === "") return 2;
+    const names = [e.id, entryName(e), ...(e.kind === "substance" ? ((e.record as SubstanceRecord).aliases ?? []) : [])].map((n) => n.toLowerCase());
+    return names.includes(q) ? 0 : names.some((n) => n.startsWith(q)) ? 1 : 2;
+  };
   return entries
     .filter((e) => (kind === "all" || e.kind === kind) && (layer === "all" || e.layer === layer) && words.every((w) => searchText(e).includes(w)))
-    .map((e, i) => ({ e, i }))
-    .sort((a, b) => KIND_ORDER.indexOf(a.e.kind) - KIND_ORDER.indexOf(b.e.kind) || LAYER_FIRST.indexOf(a.e.layer) - LAYER_FIRST.indexOf(b.e.layer) || a.i - b.i)
+    .map((e, i) => ({ e, i, r: rankOf(e) }))
+    .sort((a, b) => a.r - b.r || KIND_ORDER.indexOf(a.e.kind) - KIND_ORDER.indexOf(b.e.kind) || LAYER_FIRST.indexOf(a.e.layer) - LAYER_FIRST.indexOf(b.e.layer) || a.i - b.i)
     .map((x) => x.e);
 }

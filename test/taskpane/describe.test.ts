@@ -66,3 +66,13 @@ test("search matches names, aliases and ids, every word, any case; kind and laye
   expect(filterEntries(all, "", "system", "workbook").map(entryName)).toEqual(["acetate", "HB amine"]);
   expect(filterEntries(all, "no such thing at all", "all")).toEqual([]);
 });
+
+test("search ranks an exact name first, then names that start with the query ('Tris base' before trisodium phosphate)", () => {
+  const all = lib.list();
+  const tris = filterEntries(all, "Tris base", "all");
+  expect(tris[0].id).toBe("tris-base");
+  const pre = filterEntries(all, "tris", "substance");
+  const firstOther = pre.findIndex((e) => !(e.record as { name: string }).name.toLowerCase().startsWith("tris") && !e.id.startsWith("tris") && !((e.record as { aliases?: string[] }).aliases ?? []).some((a) => a.toLowerCase().startsWith("tris")));
+  const lastPrefix = pre.map((e) => e.id).lastIndexOf(pre.filter((e) => e.id.startsWith("tris") || (e.record as { name: string }).name.toLowerCase().startsWith("tris")).slice(-1)[0]?.id ?? "");
+  expect(firstOther === -1 || lastPrefix < firstOther).toBe(true);
+});
