@@ -28,8 +28,18 @@ export const SOLVER = {
   maxIonicStrengthIterations: 150,
 } as const;
 
-/** Warning thresholds. */
+/** Warning thresholds and the one hard limit. */
 export const LIMITS = {
+  /**
+   * mol/L: the ionic-strength limit. Beyond it no pH or pH-derived number is given by any function
+   * or view (ionic-limit.ts enforces it): none of the activity models here describes such a
+   * solution — Davies is meant for I ≲ 0.3–0.5 mol/L (Davies, Ion Association, 1962), extended
+   * Debye–Hückel for I ≤ 0.1 mol/L. 1 mol/L keeps a 1 mol/L strong acid or base stock answerable
+   * (with the warnings below). Common practice, the design's choice.
+   */
+  maxIonicStrength: 1,
+  /** Relative rounding allowance on that limit: 1 mol/L NaOH solves to I = 1 + [H⁺] + solver rounding. */
+  maxIonicStrengthRounding: 1e-9,
   /** mol/L: above this the activity models lose accuracy (Davies 1962; docs/references.md, section 2 gives 0.3–0.5). */
   ionicStrengthCaution: 0.3,
   /** mol/L: extended Debye–Hückel (one ion-size parameter for every ion) is meant for I ≤ 0.1 (README, Validity limits). */

@@ -31,9 +31,11 @@ export { daviesLog10Gamma } from "./activity/davies";
 export { debyeHuckelLog10Gamma, BATES_GUGGENHEIM_BA } from "./activity/debye-huckel";
 export { idealLog10Gamma } from "./activity/ideal";
 export { log10Gamma } from "./activity/model";
-export { apparentPKa, osmolarity, ionicStrength } from "./derived";
+export { apparentPKa, osmolarity, ionicStrength, PKA_SCALES, type PKaScale } from "./derived";
 export { classifyRegime } from "./regime";
 export { parseDecimal, readDecimal, leadingDecimal } from "./number-text";
+export { assessBuffering, BUFFERING, type BufferAssessment, type BufferVerdict } from "./buffering";
+export { beyondIonicLimit, ionicLimitFailure, fmtAgainst, sideOf, IONIC_LIMIT_TEXT, THRESHOLD_ROUNDING } from "./ionic-limit";
 export { parseQuantity, type QuantityDimension, type ParseOptions } from "./units";
 export * from "./workflows";
 export {

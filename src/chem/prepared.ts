@@ -13,6 +13,7 @@ import { solveCoupled } from "./ionic-strength-iteration";
 import type { ChemOptions, Equilibrium, Failure, Mixture, PHResult } from "./types";
 import { resolveOptions } from "./validate-options";
 import { SOLVER } from "./defaults";
+import { ionicLimitFailure } from "./ionic-limit";
 
 export class PreparedMixture {
   readonly ok = true as const;
@@ -45,16 +46,29 @@ export class PreparedMixture {
     return null;
   }
 
-  /** Full equilibrium: pH, speciation, ionic strength, β, regime, warnings. */
+  /**
+   * Full equilibrium: pH, speciation, ionic strength, β, regime, warnings; the failure
+   * "beyond-limit" when the ionic strength is beyond LIMITS.maxIonicStrength (ionic-limit.ts).
+   */
   solve(opts?: ChemOptions): Equilibrium | Failure {
+    const bad = this.run(opts) ?? ionicLimitFailure(this.core.ionicStrength);
+    if (bad) return bad;
+    return buildEquilibrium(this.core, this.aggregate);
+  }
+
+  /**
+   * The same equilibrium without the ionic-strength limit: only for reporting where a mixture
+   * stands (its ionic strength, ideal osmolarity, AQ.CHECK's reasons), never for a pH-derived number.
+   */
+  solveBeyondLimit(opts?: ChemOptions): Equilibrium | Failure {
     const bad = this.run(opts);
     if (bad) return bad;
     return buildEquilibrium(this.core, this.aggregate);
   }
 
-  /** Fast path: pH, p[H] and ionic strength only. */
+  /** Fast path: pH, p[H] and ionic strength only ("beyond-limit" as solve). */
   solvePH(opts?: ChemOptions): PHResult {
-    const bad = this.run(opts);
+    const bad = this.run(opts) ?? ionicLimitFailure(this.core.ionicStrength);
     if (bad) return bad;
     const x = this.core.x;
     const pH = -(x + this.core.lnGamma1) / LN10;

@@ -124,7 +124,8 @@ export interface Equilibrium {
   warnings: string[];
 }
 
-export type FailureCode = "bad-input" | "no-convergence" | "unreachable" | "out-of-range" | "not-found";
+/** "beyond-limit": the solution's ionic strength is beyond LIMITS.maxIonicStrength (no pH-derived number). */
+export type FailureCode = "bad-input" | "no-convergence" | "unreachable" | "out-of-range" | "not-found" | "beyond-limit";
 
 export interface Failure {
   ok: false;

@@ -2,16 +2,17 @@
 import { ACTIVITY_MODELS } from "./activity/models";
 import { DEFAULTS, LIMITS } from "./defaults";
 import { fmt } from "./failure";
+import { fmtAgainst, sideOf } from "./ionic-limit";
 import type { AcidBaseSystem, ActivityModel } from "./types";
 
 /** Ionic strength beyond the activity model's range. */
 export function ionicStrengthWarning(I: number, model: ActivityModel): string | null {
-  if (I > LIMITS.ionicStrengthStrong) {
-    return `Ionic strength ${fmt(I)} mol/L is above ${LIMITS.ionicStrengthStrong} mol/L: the ${model} activity model is unreliable here, treat the pH as a rough estimate.`;
+  if (sideOf(I, LIMITS.ionicStrengthStrong) > 0) {
+    return `Ionic strength ${fmtAgainst(I, [LIMITS.ionicStrengthStrong])} mol/L is above ${LIMITS.ionicStrengthStrong} mol/L: the ${model} activity model is unreliable here, treat the pH as a rough estimate.`;
   }
   const caution = ACTIVITY_MODELS[model].cautionAbove;
-  if (I > caution) {
-    return `Ionic strength ${fmt(I)} mol/L is above ${caution} mol/L: the ${model} activity model loses accuracy here.`;
+  if (sideOf(I, caution) > 0) {
+    return `Ionic strength ${fmtAgainst(I, [caution])} mol/L is above ${caution} mol/L: the ${model} activity model loses accuracy here.`;
   }
   return null;
 }

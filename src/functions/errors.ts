@@ -3,7 +3,8 @@
  *
  * Excel shows a custom message only on #VALUE! and #N/A, so:
  * - bad input (unknown substance, mismatched ranges, negative amounts, temperature out of range) → #VALUE!
- * - a target that cannot be reached, a species not in the mixture → #N/A
+ * - a target that cannot be reached, a species not in the mixture, a solution beyond the
+ *   ionic-strength limit (no pH-derived number there) → #N/A
  * Anything unexpected becomes #VALUE! with "internal error" so a cell never shows a number we do not trust.
  */
 import type { Failure } from "../chem/types";
@@ -28,9 +29,10 @@ export function notAvailable(message: string): AqError {
   return new AqError("na", message);
 }
 
-/** Engine failure codes: an unreachable target or a missing species is #N/A, everything else #VALUE!. */
+/** Engine failure codes: an unreachable target, a missing species or the ionic-strength limit is #N/A, everything else #VALUE!. */
 export function fromFailure(failure: Failure): AqError {
-  const kind: ErrorKind = failure.code === "unreachable" || failure.code === "not-found" ? "na" : "value";
+  const na = failure.code === "unreachable" || failure.code === "not-found" || failure.code === "beyond-limit";
+  const kind: ErrorKind = na ? "na" : "value";
   return new AqError(kind, failure.message);
 }
 
@@ -50,6 +52,15 @@ export function finite(value: number, what: string): number {
   }
   if (!Number.isFinite(value)) throw new AqError("value", `internal error: ${what} is not a finite number`);
   return value;
+}
+
+/**
+ * An error value for one cell of a spilled table (a curve point beyond the ionic-strength limit):
+ * the rest of the table is still given. Excel shows it as that cell's #N/A with the message.
+ */
+export function refusedCell(failure: Failure | undefined): CustomFunctions.Error {
+  const error = fromFailure(failure ?? { ok: false, code: "beyond-limit", message: "no value is given here" });
+  return toCustomFunctionsError(error);
 }
 
 /** Messages show in a tooltip: keep them one line and reasonably short. */

@@ -142,10 +142,11 @@ export function CHECK(names: any[][], amounts: any[][], temperature?: any[][], a
  * @param names Substance names.
  * @param amounts Concentrations, mol/L (or unit text), same shape as names.
  * @param [temperature] Temperature, °C (0–100). Default 25.
- * @returns Ionic strength, mol/L. Row-wise: names as one row and amounts with one row per mixture give one result per row (a spilled column).
+ * @param [activity] Activity model of the speciation: "davies" (default), "ideal" or "debye-huckel".
+ * @returns Ionic strength, mol/L (given beyond the 1 mol/L limit too). Row-wise: names as one row and amounts with one row per mixture give one result per row (a spilled column).
  */
-export function IONIC(names: any[][], amounts: any[][], temperature?: any[][]): any[][] {
-  return rowwise(ionic, names, amounts, temperature);
+export function IONIC(names: any[][], amounts: any[][], temperature?: any[][], activity?: any[][]): any[][] {
+  return rowwise(ionic, names, amounts, temperature, activity);
 }
 
 /**
@@ -155,10 +156,11 @@ export function IONIC(names: any[][], amounts: any[][], temperature?: any[][]): 
  * @param names Substance names (non-electrolytes such as sucrose count too).
  * @param amounts Concentrations, mol/L (or unit text), same shape as names.
  * @param [temperature] Temperature, °C (0–100). Default 25.
+ * @param [activity] Activity model of the speciation: "davies" (default), "ideal" or "debye-huckel".
  * @returns Ideal osmolarity, osmol/L. Row-wise: names as one row and amounts with one row per mixture give one result per row (a spilled column).
  */
-export function OSMOLARITY(names: any[][], amounts: any[][], temperature?: any[][]): any[][] {
-  return rowwise(osmolarity, names, amounts, temperature);
+export function OSMOLARITY(names: any[][], amounts: any[][], temperature?: any[][], activity?: any[][]): any[][] {
+  return rowwise(osmolarity, names, amounts, temperature, activity);
 }
 
 /**
@@ -176,17 +178,18 @@ export function OSMOLALITY(names: any[][], amounts: any[][], temperature?: any[]
 }
 
 /**
- * Apparent (concentration) pKa of one dissociation step at a temperature and ionic strength.
+ * pKa of one dissociation step at a temperature and ionic strength, on the concentration (default), mixed or thermodynamic scale.
  * @customfunction PKA
  * @helpurl https://localhost:3000/help/pka.html
  * @param substance A substance or acid–base system name (e.g. "phosphate", "Tris").
  * @param [step] Dissociation step, 1 for the first proton lost. Default 1 (required for clarity when the system has several).
  * @param [temperature] Temperature, °C (0–100). Default 25.
- * @param [ionic_strength] Ionic strength, mol/L. Default 0 (thermodynamic pKa).
- * @returns pKa on the concentration scale for the H⁺ activity convention of AQ.PH.
+ * @param [ionic_strength] Ionic strength, mol/L (0–1). Default 0, where all scales agree.
+ * @param [scale] "concentration" (default: [H⁺][B]/[A]), "mixed" (a(H⁺)[B]/[A], for Henderson–Hasselbalch with a meter's pH) or "thermodynamic" (activities; independent of ionic strength).
+ * @returns pKa on the scale asked for (Davies activity coefficients).
  */
-export function PKA(substance: string, step?: number, temperature?: any, ionic_strength?: any): number {
-  return guard(() => pka(substance, step, temperature, ionic_strength));
+export function PKA(substance: string, step?: number, temperature?: any, ionic_strength?: any, scale?: string): number {
+  return guard(() => pka(substance, step, temperature, ionic_strength, scale));
 }
 
 /**
@@ -245,7 +248,8 @@ export function RECIPE(
  * @param max_titrant_volume Largest titrant volume to add, L or unit text.
  * @param [points] Number of points, 2–1000. Default 51.
  * @param [temperature] Temperature, °C (0–100). Default 25.
- * @returns A table with a header row: titrant volume (L), pH.
+ * @param [activity] Activity model: "davies" (default), "ideal" or "debye-huckel".
+ * @returns A table with a header row: titrant volume (L), pH (#N/A beyond the 1 mol/L ionic-strength limit), then the marked points (steepest points and stoichiometric equivalence volumes) with their volume and pH.
  */
 export function CURVE(
   names: any[][],
@@ -256,8 +260,9 @@ export function CURVE(
   max_titrant_volume: any,
   points?: number,
   temperature?: any,
+  activity?: string,
 ): any[][] {
-  return guard(() => curve(names, amounts, titrant, titrant_conc, volume, max_titrant_volume, points, temperature));
+  return guard(() => curve(names, amounts, titrant, titrant_conc, volume, max_titrant_volume, points, temperature, activity));
 }
 
 /**
@@ -269,10 +274,11 @@ export function CURVE(
  * @param amount_tolerance Relative tolerance on every amount (0.02 for ±2 %), or a range of tolerances of the same shape as names.
  * @param [pKa_uncertainty] ± uncertainty applied to every pKa, pH units. Default 0.
  * @param [temperature] Temperature, °C (0–100), default 25; or two cells for a range (2 and 8 for storage at 2–8 °C), searched as part of the worst case.
+ * @param [activity] Activity model: "davies" (default), "ideal" or "debye-huckel".
  * @returns A table with a header row: low pH, high pH, method (an exhaustive worst case over all corners, or a flagged bounded search beyond 12 varied quantities).
  */
-export function PHRANGE(names: any[][], amounts: any[][], amount_tolerance: any, pKa_uncertainty?: any, temperature?: any): any[][] {
-  return guard(() => phRange(names, amounts, amount_tolerance, pKa_uncertainty, temperature));
+export function PHRANGE(names: any[][], amounts: any[][], amount_tolerance: any, pKa_uncertainty?: any, temperature?: any, activity?: string): any[][] {
+  return guard(() => phRange(names, amounts, amount_tolerance, pKa_uncertainty, temperature, activity));
 }
 
 /**

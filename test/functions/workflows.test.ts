@@ -148,15 +148,18 @@ describe("AQ.RECIPE", () => {
 });
 
 describe("AQ.CURVE", () => {
-  test("acetic acid with NaOH: header, n rows, equivalence marked at 25 mL", () => {
+  test("acetic acid with NaOH: header, n rows, the steepest point and the stoichiometric equivalence at 25 mL", () => {
     const rows = table('=AQ.CURVE("acetic acid",0.1,"NaOH",0.1,"25 mL","50 mL",11)');
-    expect(rows[0]).toEqual(["titrant volume (L)", "pH", "equivalence"]);
+    expect(rows[0]).toEqual(["titrant volume (L)", "pH", "marked point", "marked volume (L)", "marked pH"]);
     expect(rows).toHaveLength(12);
     expectNear(rows[1][1] as number, num('=AQ.PH("acetic acid",0.1)'), 1e-12, "first row = the mixture itself");
-    const marked = rows.slice(1).filter((r) => r[2] !== "");
-    expect(marked).toHaveLength(1);
-    expectNear(marked[0][0] as number, 0.025, 1e-9, "row nearest the equivalence point");
-    expect(marked[0][2]).toMatch(/^equivalence point 1: 0\.02500 L, pH 8\.\d\d$/);
+    const marks = rows.slice(1).filter((r) => r[2] !== "");
+    expect(marks.map((r) => r[2])).toEqual(["steepest point 1 (inflection)", "stoichiometric equivalence 1"]);
+    // stoichiometric: 0.1 mol/L × 25 mL / 0.1 mol/L = 25 mL exactly; the inflection within 0.1 % of it.
+    expectNear(marks[1][3] as number, 0.025, 1e-15, "stoichiometric volume");
+    expectNear(marks[0][3] as number, 0.025, 0.025e-3, "steepest point");
+    // the pH listed at the stoichiometric volume is the curve's pH there: 0.05 M sodium acetate after dilution
+    expectNear(marks[1][4] as number, num('=AQ.PH("sodium acetate",0.05)'), 1e-9, "pH at the stoichiometric point");
     for (let i = 2; i < rows.length; i++) expect(rows[i][1] as number).toBeGreaterThan(rows[i - 1][1] as number);
   });
 

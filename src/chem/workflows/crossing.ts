@@ -9,6 +9,10 @@
  * within one grid interval is not seen, so grids are fine near 0 (geometric spacing).
  * If no grid point changes sign the target is not reached along the path: the caller gets every
  * value seen, to say which way and how far the path goes.
+ * A point beyond the ionic-strength limit ("beyond-limit") ends the path there: the boundary
+ * between the last point with a value and the first without is found by bisection (to 1e-12 of
+ * the interval), each point on the way checked for the crossing, so a target reached just inside
+ * the limit is still found and an unreachable one is reported with the last pH the limit allows.
  */
 import { brentRoot, type Evaluation } from "./brent";
 import type { Failure } from "../types";
@@ -35,19 +39,54 @@ export function firstCrossing(g: (t: number) => Evaluation, grid: readonly numbe
   const samples: Sample[] = [{ t: grid[0], value: first.value }];
   if (first.value === 0) return { ok: true, found: true, t: grid[0], evaluations: 1 };
   const s0 = Math.sign(first.value);
+  const bracketed = (prev: Sample, t: number, value: number, evaluations: number): CrossingResult => {
+    const root = brentRoot(g, prev.t, t, prev.value, value, { ftol });
+    if (!root.ok) return root;
+    return { ok: true, found: true, t: root.x, evaluations: evaluations + root.evaluations };
+  };
   for (let i = 1; i < grid.length; i++) {
     const r = g(grid[i]);
+    if (!r.ok && r.code === "beyond-limit") return toBoundary(g, samples, grid[i], r, s0, i + 1, bracketed);
     if (!r.ok) return { ok: true, found: false, samples, failure: r };
     samples.push({ t: grid[i], value: r.value });
     if (r.value === 0) return { ok: true, found: true, t: grid[i], evaluations: i + 1 };
-    if (Math.sign(r.value) !== s0) {
-      const prev = samples[i - 1];
-      const root = brentRoot(g, prev.t, grid[i], prev.value, r.value, { ftol });
-      if (!root.ok) return root;
-      return { ok: true, found: true, t: root.x, evaluations: i + 1 + root.evaluations };
-    }
+    if (Math.sign(r.value) !== s0) return bracketed(samples[i - 1], grid[i], r.value, i + 1);
   }
   return { ok: true, found: false, samples };
+}
+
+/** Bisection towards the ionic-strength limit between the last sample and `bad` (see the header). */
+function toBoundary(
+  g: (t: number) => Evaluation,
+  samples: Sample[],
+  bad: number,
+  failure: Failure,
+  s0: number,
+  evaluations: number,
+  bracketed: (prev: Sample, t: number, value: number, evaluations: number) => CrossingResult,
+): CrossingResult {
+  let a = samples[samples.length - 1].t;
+  let b = bad;
+  const width = b - a;
+  let n = evaluations;
+  let stop = failure;
+  while (b - a > 1e-12 * width) {
+    const m = 0.5 * (a + b);
+    if (m <= a || m >= b) break;
+    const r = g(m);
+    n++;
+    if (!r.ok) {
+      if (r.code !== "beyond-limit") return { ok: true, found: false, samples, failure: r };
+      b = m;
+      stop = r;
+      continue;
+    }
+    if (r.value === 0) return { ok: true, found: true, t: m, evaluations: n };
+    if (Math.sign(r.value) !== s0) return bracketed(samples[samples.length - 1], m, r.value, n);
+    samples.push({ t: m, value: r.value });
+    a = m;
+  }
+  return { ok: true, found: false, samples, failure: stop };
 }
 
 /** 0 followed by geometric points from `from` to `to` (inclusive), `perDecade` per factor of ten. */

@@ -4,7 +4,8 @@
  */
 export { adjust, ADJUST_PH_TOLERANCE, type AdjustOptions, type AdjustExcess, type AdjustStock, type AdjustValue, type AdjustResult } from "./adjust";
 export { capacity, STRONG_BASE, STRONG_ACID, type CapacityValue, type CapacityResult } from "./capacity";
-export { curve, CURVE_POINTS_DEFAULT, CURVE_POINTS_MIN, CURVE_POINTS_MAX, type CurveRequest, type CurvePoint, type CurveValue, type CurveResult } from "./curve";
+export { curve, CURVE_POINTS_DEFAULT, CURVE_POINTS_MIN, CURVE_POINTS_MAX, type CurveRequest, type CurvePoint, type StoichiometricPoint, type CurveValue, type CurveResult } from "./curve";
+export { stoichiometricVolumes, strongCharge } from "./stoichiometric";
 export { EQUIVALENCE_PROMINENCE, type EquivalencePoint } from "./equivalence";
 export { phRange, statisticalBand, PHRANGE_COVERAGE_K, PHRANGE_MAX_EXHAUSTIVE, PHRANGE_MAX_QUANTITIES, type PHRangeOptions, type PHRangeValue, type PHRangeResult, type StatisticalBand } from "./ph-range";
 export { phRangeOverTemperature, PHRANGE_MAX_TEMPERATURES, type PHRangeOverTemperatureValue } from "./ph-range-temperature";

@@ -14,6 +14,7 @@ import { fail, fmt } from "../failure";
 import type { ChemOptions, Component, Mixture, Result } from "../types";
 import { adjust, ADJUST_PH_TOLERANCE } from "./adjust";
 import { firstCrossing, geometricGrid } from "./crossing";
+import { IONIC_LIMIT_TEXT } from "../ionic-limit";
 import { pHOffset } from "./mixing";
 import { fmtPH } from "./validate";
 
@@ -84,9 +85,14 @@ export function solveBuffer(plan: BufferPlan, C: number, target: number, backgro
   if (!r.found) {
     const first = r.samples[0].value + target;
     const last = r.samples[r.samples.length - 1].value + target;
-    const stopped = r.failure ? ` (the engine has no result beyond a share of ${fmt(r.samples[r.samples.length - 1].t)}: ${r.failure.message})` : "";
+    const atLimit = r.failure?.code === "beyond-limit";
+    const stopped = !r.failure
+      ? ""
+      : atLimit
+        ? ` (beyond a base share of ${fmt(r.samples[r.samples.length - 1].t)} the ionic strength exceeds the ${IONIC_LIMIT_TEXT} limit, where no pH is given)`
+        : ` (the engine has no result beyond a share of ${fmt(r.samples[r.samples.length - 1].t)}: ${r.failure.message})`;
     return fail(
-      "unreachable",
+      atLimit ? "beyond-limit" : "unreachable",
       `${plan.acid.name} and ${plan.base.name} at ${fmt(C)} mol/L in total span pH ${fmtPH(first, target)} (all ${plan.acid.name}) to ${fmtPH(last, target)} (all ${plan.base.name}): the target ${fmtPH(target, first)} is outside that range${stopped}.`,
     );
   }

@@ -22,6 +22,7 @@
  * concentration is given for the component (liquids such as hydrochloric acid).
  */
 import { fail, fmt } from "../failure";
+import { ionicLimitFailure } from "../ionic-limit";
 import { prepare } from "../prepared";
 import type { ChemOptions, Component, Mixture, Result } from "../types";
 import { resolveOptions } from "../validate-options";
@@ -90,6 +91,8 @@ function checkRequest(req: RecipeRequest): ReturnType<typeof fail> | null {
   if (req.ionicStrength !== undefined) {
     const I = req.ionicStrength;
     if (typeof I !== "number" || !Number.isFinite(I) || I < 0) return fail("bad-input", `The target ionic strength must be a number ≥ 0 mol/L, got ${String(I)}.`);
+    const beyond = ionicLimitFailure(I);
+    if (beyond) return beyond;
     const badSalt = checkComponent(req.salt, "salt");
     if (badSalt) return fail("bad-input", "A target ionic strength needs a salt to make it up with (for example NaCl).");
     const salt = req.salt as Component;
@@ -158,17 +161,32 @@ function saltForIonicStrength(plan: BufferPlan, req: RecipeRequest, chem: ChemOp
     const b = batchAt(plan, req, s, chem);
     return b.ok ? { ok: true as const, value: b.ionicStrength - target } : b;
   };
+  // Bracket [lo, hi] with I(lo) < I* ≤ I(hi): hi doubles from an estimate; a trial beyond the
+  // ionic-strength limit (I* itself is within it) halves back towards lo.
+  let lo = 0;
+  let hLo = -gap;
   let hi = Math.min(most, (1.5 * gap) / perMole);
-  let hHi = h(hi);
-  while (hHi.ok && hHi.value < 0 && hi < most) {
+  let hHi: number | null = null;
+  for (let k = 0; k < 400 && hHi === null; k++) {
+    const r = h(hi);
+    if (!r.ok) {
+      if (r.code !== "beyond-limit") return r;
+      hi = lo + 0.5 * (hi - lo);
+      continue;
+    }
+    if (r.value >= 0) {
+      hHi = r.value;
+      break;
+    }
+    if (hi >= most) {
+      return fail("unreachable", `Even ${fmt(most)} mol/L of ${salt.name}, the most the engine accepts, leaves the ionic strength below ${fmt(target)} mol/L.`);
+    }
+    lo = hi;
+    hLo = r.value;
     hi = Math.min(most, 2 * hi);
-    hHi = h(hi);
   }
-  if (!hHi.ok) return hHi;
-  if (hHi.value < 0) {
-    return fail("unreachable", `Even ${fmt(most)} mol/L of ${salt.name}, the most the engine accepts, leaves the ionic strength below ${fmt(target)} mol/L.`);
-  }
-  const root = brentRoot(h, 0, hi, -gap, hHi.value, { ftol: RECIPE_I_TOLERANCE * target });
+  if (hHi === null) return fail("no-convergence", `No amount of ${salt.name} could be bracketed for the ionic strength ${fmt(target)} mol/L.`);
+  const root = brentRoot(h, lo, hi, hLo, hHi, { ftol: RECIPE_I_TOLERANCE * target });
   if (!root.ok) return root;
   return batchAt(plan, req, root.x, chem);
 }

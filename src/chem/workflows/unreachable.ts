@@ -6,6 +6,7 @@ import { fail, fmt } from "../failure";
 import type { Component, Failure } from "../types";
 import type { Sample } from "./crossing";
 import { fmtPH } from "./validate";
+import { IONIC_LIMIT_TEXT } from "../ionic-limit";
 
 export interface PathDescription {
   titrant: Component;
@@ -20,6 +21,18 @@ export interface PathDescription {
   stoppedBy?: Failure;
 }
 
+/** 6 significant digits rounded towards zero: an amount quoted at a limit stays on the near side of it. */
+function fmtDown(x: number): string {
+  if (!(x > 0) || !Number.isFinite(x)) return fmt(x);
+  const step = Math.pow(10, Math.floor(Math.log10(x)) - 5);
+  const down = Number((Math.floor(x / step) * step).toPrecision(6));
+  return fmt(down > x ? Number((down - step).toPrecision(6)) : down);
+}
+
+/**
+ * The failure is "beyond-limit" when the path was cut by the ionic-strength limit (the target may
+ * lie beyond it, where no pH is given), "unreachable" otherwise.
+ */
 export function unreachable(d: PathDescription): Failure {
   const pHs = d.samples.map((s) => s.value + d.target);
   const start = pHs[0];
@@ -37,8 +50,17 @@ export function unreachable(d: PathDescription): Failure {
   }
   const extreme = raises ? Math.max(...pHs) : Math.min(...pHs);
   const most = raises ? "at most" : "at least";
-  const stopped = d.stoppedBy ? ` (the engine has no result beyond that point: ${d.stoppedBy.message})` : "";
+  const atLimit = d.stoppedBy?.code === "beyond-limit";
+  const stopped = d.stoppedBy && !atLimit ? ` (the engine has no result beyond that point: ${d.stoppedBy.message})` : "";
+  const limitNote = atLimit ? `, where the ionic strength reaches the ${IONIC_LIMIT_TEXT} limit beyond which no pH is given` : "";
   if (d.mode === "stock") {
+    if (atLimit) {
+      const f = d.samples[d.samples.length - 1].t;
+      return fail(
+        "beyond-limit",
+        `With ${name} at ${fmt(d.limit)} mol/L the pH reaches ${most} ${fmtPH(extreme, d.target)} (at ${fmtDown(f / (1 - f))} L of stock per litre of batch${limitNote}), short of the target ${fmtPH(d.target, extreme)}.`,
+      );
+    }
     const weak = d.titrant.systems.length > 0 ? "A weak titrant" : "A titrant";
     return fail(
       "unreachable",
@@ -47,9 +69,13 @@ export function unreachable(d: PathDescription): Failure {
   }
   const searched = d.samples[d.samples.length - 1].t;
   const kind = d.titrant.systems.length > 0 ? "A weak titrant cannot pass its own pH: with" : "With";
-  const where = searched >= d.limit * (1 - 1e-6) ? `at ${fmt(d.limit)} mol/L, the most the engine accepts` : `at ${fmt(searched)} mol/L`;
+  const where = atLimit
+    ? `at ${fmtDown(searched)} mol/L${limitNote}`
+    : searched >= d.limit * (1 - 1e-6)
+      ? `at ${fmt(d.limit)} mol/L, the most the engine accepts`
+      : `at ${fmt(searched)} mol/L`;
   return fail(
-    "unreachable",
+    atLimit ? "beyond-limit" : "unreachable",
     `${kind} ${name} added without dilution the pH reaches ${most} ${fmtPH(extreme, d.target)} (${where}), short of the target ${fmtPH(d.target, extreme)}${stopped}.`,
   );
 }

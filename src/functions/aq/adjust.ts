@@ -11,7 +11,6 @@ import { badInput, finite, orThrow } from "../errors";
 import { readMixtureArgs } from "../mixture";
 import { resolveComponent } from "../substances";
 import { chemOptions } from "./options";
-import { trustIonicStrength } from "./trust";
 
 export function adjust(
   names: Cell,
@@ -29,12 +28,12 @@ export function adjust(
   const component = resolveComponent(text(titrant, "titrant"));
   const options = { ...chemOptions(temperature, activity), ...(isBlank(measuredPH) ? {} : { measuredPH: plainNumber(measuredPH, "measured_pH") }) };
   if (isBlank(titrantConc) && isBlank(volume)) {
-    return finite(trustIonicStrength(orThrow(adjustMixture(mixture, component, target, options)), "the titrant amount").value, "titrant amount");
+    return finite(orThrow(adjustMixture(mixture, component, target, options)).value, "titrant amount");
   }
   if (isBlank(titrantConc)) throw badInput("volume needs titrant_conc: give the stock concentration too, or leave both out for mol per litre");
   if (isBlank(volume)) throw badInput("titrant_conc needs volume: give the batch volume too (the result is then litres of stock), or leave both out for mol per litre");
   const conc = quantity(titrantConc, "titrant_conc", "concentration", { molarMass: component.molarMass });
   const litres = quantity(volume, "volume", "volume");
   const stock = { conc, volume: litres };
-  return finite(trustIonicStrength(orThrow(adjustMixture(mixture, component, target, { ...options, stock })), "the stock volume").value, "litres of stock");
+  return finite(orThrow(adjustMixture(mixture, component, target, { ...options, stock })).value, "litres of stock");
 }

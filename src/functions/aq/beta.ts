@@ -2,8 +2,7 @@
 import type { Cell } from "../args";
 import { finite } from "../errors";
 import { equilibriumOf } from "./equilibrium-of-args";
-import { trustIonicStrength } from "./trust";
 
 export function beta(names: Cell, amounts: Cell, temperature: Cell, activity: Cell): number {
-  return finite(trustIonicStrength(equilibriumOf(names, amounts, temperature, activity), "the buffer value").beta, "buffer value");
+  return finite(equilibriumOf(names, amounts, temperature, activity).beta, "buffer value");
 }

@@ -7,10 +7,9 @@ import { plainNumber, type Cell } from "../args";
 import { finite, orThrow } from "../errors";
 import { readMixtureArgs } from "../mixture";
 import { chemOptions } from "./options";
-import { trustIonicStrength } from "./trust";
 
 export function capacity(names: Cell, amounts: Cell, deltaPH: Cell, temperature: Cell, activity: Cell): number {
   const { mixture } = readMixtureArgs(names, amounts);
   const delta = plainNumber(deltaPH, "delta_pH");
-  return finite(trustIonicStrength(orThrow(capacityOf(mixture, delta, chemOptions(temperature, activity))), "the capacity").value, "capacity");
+  return finite(orThrow(capacityOf(mixture, delta, chemOptions(temperature, activity))).value, "capacity");
 }

@@ -1,20 +1,23 @@
 /**
  * AQ.CURVE: titration curve as a spilled table with a header row —
- *   titrant volume (L) | pH | equivalence
- * The first two columns are a clean numeric block: select them (header included) and insert an X-Y
- * scatter chart; the header becomes the series name. Equivalence points are marked in a third
- * column, as text on the row nearest each point ("equivalence point 1: 0.02500 L, pH 8.73", the
- * refined volume and pH, not the row's), blank elsewhere. A trailing note row was not chosen: it
- * would put text into the chart's data columns and break a chart over the whole spill.
+ *   titrant volume (L) | pH | marked point | marked volume (L) | marked pH
+ * The first two columns are the curve, a clean numeric block: select them (header included) and
+ * insert an X-Y scatter chart. A point whose solution is beyond the ionic-strength limit is #N/A in
+ * its own pH cell, with the engine's message; the others are still given.
+ * The last three columns list, from the first data row down in order of volume, the marked points:
+ * each "steepest point k (inflection)" of the computed curve and each "stoichiometric equivalence k"
+ * computed from the amounts (strong titrants), with its exact volume and pH — a second chart series
+ * (columns 4 and 5) shows them on the curve. The two differ by a few per cent for a dilute weak
+ * system, which is why both are given and neither is called the other.
  */
 import { curve as curveOf } from "../../chem/workflows";
 import { plainNumber, quantity, text, type Cell } from "../args";
-import { finite, orThrow } from "../errors";
+import { finite, orThrow, refusedCell } from "../errors";
 import { readMixtureArgs } from "../mixture";
 import { resolveComponent } from "../substances";
 import { chemOptions } from "./options";
 
-export const CURVE_HEADER = ["titrant volume (L)", "pH", "equivalence"];
+export const CURVE_HEADER = ["titrant volume (L)", "pH", "marked point", "marked volume (L)", "marked pH"];
 
 export function curve(
   names: Cell,
@@ -25,6 +28,7 @@ export function curve(
   maxTitrantVolume: Cell,
   points: Cell,
   temperature: Cell,
+  activity: Cell,
 ): unknown[][] {
   const { mixture } = readMixtureArgs(names, amounts);
   const component = resolveComponent(text(titrant, "titrant"));
@@ -32,14 +36,25 @@ export function curve(
   const initial = quantity(volume, "volume", "volume");
   const maxVolume = quantity(maxTitrantVolume, "max_titrant_volume", "volume");
   const n = plainNumber(points, "points", 51);
-  const r = orThrow(curveOf(mixture, component, { stockConc, volume: initial, maxVolume, points: n }, chemOptions(temperature)));
-  const marks = new Map<number, string>();
-  r.equivalence.forEach((e, i) => {
-    const label = `equivalence point ${i + 1}: ${e.volume.toPrecision(4)} L, pH ${e.pH.toFixed(2)}`;
-    const previous = marks.get(e.nearestIndex);
-    marks.set(e.nearestIndex, previous === undefined ? label : `${previous}; ${label}`);
-  });
+  const r = orThrow(curveOf(mixture, component, { stockConc, volume: initial, maxVolume, points: n }, chemOptions(temperature, activity)));
+  const marks: { label: string; volume: number; pH: unknown }[] = [];
+  r.equivalence.forEach((e, i) => marks.push({ label: `steepest point ${i + 1} (inflection)`, volume: e.volume, pH: finite(e.pH, "pH") }));
+  r.stoichiometric.forEach((e, i) =>
+    marks.push({ label: `stoichiometric equivalence ${i + 1}`, volume: e.volume, pH: e.pH === null ? refusedCell(e.refused) : finite(e.pH, "pH") }),
+  );
+  marks.sort((a, b) => a.volume - b.volume);
   const rows: unknown[][] = [CURVE_HEADER];
-  r.points.forEach((p, i) => rows.push([finite(p.volume, "volume"), finite(p.pH, "pH"), marks.get(i) ?? ""]));
+  const height = Math.max(r.points.length, marks.length);
+  for (let i = 0; i < height; i++) {
+    const p = r.points[i];
+    const m = marks[i];
+    rows.push([
+      p === undefined ? "" : finite(p.volume, "volume"),
+      p === undefined ? "" : p.pH === null ? refusedCell(p.refused) : finite(p.pH, "pH"),
+      m === undefined ? "" : m.label,
+      m === undefined ? "" : finite(m.volume, "volume"),
+      m === undefined ? "" : m.pH,
+    ]);
+  }
   return rows;
 }

@@ -23,7 +23,7 @@ function relative(value: Cell, what: string): number {
   return plainNumber(value, what);
 }
 
-/** One tolerance per mixture entry, aligned with readMixtureArgs's entries (blank names skipped). */
+/** One tolerance per mixture entry, aligned with readMixture's entries (blank names skipped). */
 function tolerances(names: Cell, amountTolerance: Cell): number | number[] {
   const tShape = shapeOf(amountTolerance);
   if (tShape[0] === 1 && tShape[1] === 1) return relative(cellsOf(amountTolerance)[0].value, "amount_tolerance");
@@ -56,17 +56,17 @@ function temperatureRange(temperature: Cell): [number, number] | null {
   return [chemOptions(cells[0].value).temperatureC, chemOptions(cells[1].value).temperatureC];
 }
 
-export function phRange(names: Cell, amounts: Cell, amountTolerance: Cell, pKaUncertainty: Cell, temperature: Cell): unknown[][] {
+export function phRange(names: Cell, amounts: Cell, amountTolerance: Cell, pKaUncertainty: Cell, temperature: Cell, activity: Cell): unknown[][] {
   const { mixture } = readMixtureArgs(names, amounts);
   const tol = tolerances(names, amountTolerance);
   const u = plainNumber(pKaUncertainty, "pKa_uncertainty", 0);
   const range = temperatureRange(temperature);
   if (range !== null) {
-    const r = orThrow(phRangeOverTemperature(mixture, tol, range, { pKaUncertainty: u }));
+    const r = orThrow(phRangeOverTemperature(mixture, tol, range, { pKaUncertainty: u, activity: chemOptions(null, activity).activity }));
     const over = `${methodText(r)}, at each of ${r.temperatures.length} temperatures from ${r.temperatureRange[0]} to ${r.temperatureRange[1]} °C`;
     return [PHRANGE_HEADER, [finite(r.low, "low pH"), finite(r.high, "high pH"), over]];
   }
   const single = Array.isArray(temperature) ? cellsOf(temperature).find((c) => !isBlank(c.value))?.value ?? null : temperature;
-  const r = orThrow(phRangeOf(mixture, tol, { ...chemOptions(single), pKaUncertainty: u }));
+  const r = orThrow(phRangeOf(mixture, tol, { ...chemOptions(single, activity), pKaUncertainty: u }));
   return [PHRANGE_HEADER, [finite(r.low, "low pH"), finite(r.high, "high pH"), methodText(r)]];
 }

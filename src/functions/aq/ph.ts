@@ -3,10 +3,9 @@ import type { Cell } from "../args";
 import { finite, orThrow } from "../errors";
 import { readMixtureArgs } from "../mixture";
 import { chemOptions } from "./options";
-import { trustIonicStrength } from "./trust";
 
 export function ph(names: Cell, amounts: Cell, temperature: Cell, activity: Cell): number {
   const { prepared } = readMixtureArgs(names, amounts);
-  const result = trustIonicStrength(orThrow(prepared.solvePH(chemOptions(temperature, activity))), "pH");
+  const result = orThrow(prepared.solvePH(chemOptions(temperature, activity)));
   return finite(result.pH, "pH");
 }

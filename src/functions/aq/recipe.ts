@@ -17,7 +17,6 @@ import { readEntries } from "../mixture";
 import { resolveComponent } from "../substances";
 import { chemOptions } from "./options";
 import { resolveWithStock } from "./stock-name";
-import { trustIonicStrength } from "./trust";
 
 export const RECIPE_HEADER = ["component", "mol", "grams", "litres of stock"];
 
@@ -56,7 +55,7 @@ export function recipe(
   } else if (!isBlank(salt)) {
     throw badInput("salt is used only with ionic_strength: give the target ionic strength too");
   }
-  const r = trustIonicStrength(orThrow(recipeOf(req, chemOptions(temperature, activity))), "the recipe");
+  const r = orThrow(recipeOf(req, chemOptions(temperature, activity)));
   const rows: unknown[][] = [RECIPE_HEADER];
   for (const line of r.lines) {
     rows.push([

@@ -6,7 +6,6 @@ import type { Species } from "../../chem/types";
 import { isBlank, text, type Cell } from "../args";
 import { finite, notAvailable } from "../errors";
 import { equilibriumOf } from "./equilibrium-of-args";
-import { trustIonicStrength } from "./trust";
 
 export const SPECIES_HEADER = ["species", "charge", "mol/L", "fraction"];
 
@@ -28,7 +27,7 @@ export function normalizeSpeciesName(name: string): string {
 }
 
 export function species(names: Cell, amounts: Cell, which: Cell, temperature: Cell, activity: Cell): unknown[][] {
-  const eq = trustIonicStrength(equilibriumOf(names, amounts, temperature, activity), "the speciation");
+  const eq = equilibriumOf(names, amounts, temperature, activity);
   if (!isBlank(which)) {
     const wanted = normalizeSpeciesName(text(which, "species"));
     const found: Species[] = eq.species.filter((s) => normalizeSpeciesName(s.name) === wanted);

@@ -152,7 +152,11 @@ export function titration(mix: Mixture, titrants: Record<TitrantName, Component>
   const maxL = opts.maxVolume ?? curveEnd(mix, titrants[titrant], base, sp, stockConc, volume, warnings);
   const r = curve(mix, titrants[titrant], { stockConc, volume, maxVolume: maxL, points: opts.points ?? TITRATION_DEFAULTS.points }, chem);
   if (!r.ok) return r;
+  if (r.points[0].refused) return r.points[0].refused;
   for (const w of r.warnings) if (!warnings.includes(w)) warnings.push(w);
+  // Points beyond the ionic-strength limit have no pH (as in AQ.CURVE): not drawn, and said so.
+  const refused = r.points.find((p) => p.refused);
+  if (refused?.refused) warnings.push(`No pH is drawn from ${(refused.volume * 1000).toPrecision(3)} mL on: ${refused.refused.message}`);
   return {
     ok: true,
     titrant,
@@ -160,9 +164,9 @@ export function titration(mix: Mixture, titrants: Record<TitrantName, Component>
     stockConc,
     sampleVolumeML: volume * 1000,
     maxML: maxL * 1000,
-    points: r.points.map((p) => ({ mL: p.volume * 1000, pH: p.pH })),
+    points: r.points.flatMap((p) => (p.pH === null ? [] : [{ mL: p.volume * 1000, pH: p.pH }])),
     equivalence: r.equivalence.map((e) => ({ mL: e.volume * 1000, pH: e.pH })),
-    startPH: r.points[0].pH,
+    startPH: r.points[0].pH as number,
     warnings,
   };
 }

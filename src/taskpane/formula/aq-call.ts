@@ -52,11 +52,11 @@ export const MIXTURE_FUNCTIONS: readonly MixtureFunction[] = [
   fn("CAPACITY", ["names", "amounts", "delta_pH", "temperature", "activity"]),
   fn("SPECIES", ["names", "amounts", "species", "temperature", "activity"]),
   fn("CHECK", ["names", "amounts", "temperature", "activity"]),
-  fn("IONIC", ["names", "amounts", "temperature"]),
-  fn("OSMOLARITY", ["names", "amounts", "temperature"]),
+  fn("IONIC", ["names", "amounts", "temperature", "activity"]),
+  fn("OSMOLARITY", ["names", "amounts", "temperature", "activity"]),
   fn("OSMOLALITY", ["names", "amounts", "temperature", "activity"]),
-  fn("CURVE", ["names", "amounts", "titrant", "titrant_conc", "volume", "max_titrant_volume", "points", "temperature"]),
-  fn("PHRANGE", ["names", "amounts", "amount_tolerance", "pKa_uncertainty", "temperature"]),
+  fn("CURVE", ["names", "amounts", "titrant", "titrant_conc", "volume", "max_titrant_volume", "points", "temperature", "activity"]),
+  fn("PHRANGE", ["names", "amounts", "amount_tolerance", "pKa_uncertainty", "temperature", "activity"]),
 ];
 
 /**

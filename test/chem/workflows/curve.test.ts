@@ -72,9 +72,9 @@ describe("curve: rows", () => {
     expect(r.points[0].volume).toBe(0);
     expect(r.points[10].volume).toBe(0.1);
     r.points.forEach(({ volume, pH }) => {
-      f.expectAbs(pH, f.pH(mixedWithStock(mix, f.NaOH, 1, volume / (0.8 + volume))), 1e-12, `row at ${volume} L`);
+      f.expectAbs(pH as number, f.pH(mixedWithStock(mix, f.NaOH, 1, volume / (0.8 + volume))), 1e-12, `row at ${volume} L`);
     });
-    f.expectAbs(r.points[0].pH, f.pH(mix), 1e-12, "first row is the mixture itself");
+    f.expectAbs(r.points[0].pH as number, f.pH(mix), 1e-12, "first row is the mixture itself");
   });
 
   test("pH rises monotonically with a strong base and falls with a strong acid (random buffers)", () => {
@@ -88,7 +88,7 @@ describe("curve: rows", () => {
           const mix = f.mixture([f.KH2PO4, ca], [f.Na2HPO4, cb]);
           const r = f.ok(curve(mix, base ? f.NaOH : f.HCl, { stockConc: 0.5, volume: 0.1, maxVolume: 0.05, points: n }));
           for (let i = 1; i < r.points.length; i++) {
-            const step = r.points[i].pH - r.points[i - 1].pH;
+            const step = (r.points[i].pH as number) - (r.points[i - 1].pH as number);
             if (base ? !(step > 0) : !(step < 0)) throw new Error(`KH2PO4 ${ca} + Na2HPO4 ${cb}, ${base ? "NaOH" : "HCl"}: row ${i} step ${step}`);
           }
         },
