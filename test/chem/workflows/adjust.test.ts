@@ -119,7 +119,7 @@ describe("adjust: unreachable targets say which way and how far", () => {
 
   test("without dilution a weak titrant is limited by the ionic-strength limit, and the message quotes the pH there", () => {
     const r = adjust(acetateBuffer, f.sodiumAcetate, 12);
-    expect(r.ok ? "ok" : r.code).toBe("unreachable");
+    expect(r.ok ? "ok" : r.code).toBe("beyond-limit");
     if (r.ok) return;
     // 0.05 + 0.05 acetate buffer (I = 0.05 from Na⁺ and acetate): sodium acetate adds 1 mol/L of
     // ionic strength per mol/L, so the limit is reached at about 0.95 mol/L added.
