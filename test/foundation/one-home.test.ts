@@ -67,4 +67,10 @@ describe("each rule has one home", () => {
     expect(copies(/no substance name beside it|no amount for '|give one amount per name|the mixture is empty/, ["src/chem/name-amount-pairs.ts"])).toEqual([]);
     expect(copies(/\(item \$\{/, ["src/chem/name-amount-pairs.ts"])).toEqual([]);
   });
+
+  test("the ionic-strength limit (1 mol/L, no pH-derived number beyond it): LIMITS in src/chem/defaults.ts, enforced in src/chem/ionic-limit.ts", () => {
+    // a comparison of an ionic strength with a number, or the limit's constant, outside its homes
+    expect(copies(/[iI]onicStrength\s*[<>]=?\s*(?!0\b)\d|MAX_TRUSTED_IONIC|maxIonicStrength\b/, ["src/chem/defaults.ts", "src/chem/ionic-limit.ts"]).filter((l) => !/LIMITS\.maxIonicStrength/.test(l) || /=\s*\d/.test(l))).toEqual([]);
+    expect(copies(/beyond the \$\{?[^}]*\}? ?mol\/L limit|trustIonicStrength/, ["src/chem/ionic-limit.ts"])).toEqual([]);
+  });
 });
