@@ -30,6 +30,7 @@ export async function runEval(options: Options, print: Printer): Promise<number>
     const value = result.value ?? null;
     if (Array.isArray(value)) for (const row of value) print.out(row.map((c) => readableCell(c, rounding)).join("\t"));
     else print.out(readableCell(value, rounding));
+    print.note("caution: a calculated pH is an estimate; confirm with a calibrated meter and your validated procedures");
   }
   return result.error !== undefined ? 1 : 0;
 }
