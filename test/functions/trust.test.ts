@@ -103,3 +103,31 @@ describe("messages quote only numbers the tool would give (item 3)", () => {
     expect(n.value as number).toBeCloseTo(0.1, 6);
   });
 });
+
+describe("one titrant reader for ADJUST and RECIPE (item 8)", () => {
+  const ACETATE = '{"acetic acid";"sodium acetate"},{0.05;0.05}';
+  test.each([
+    ['"1 M NaOH"', '"NaOH",1'],
+    ['"NaOH 1 M"', '"NaOH",1'],
+    ['"NaOH 0.01 M"', '"NaOH",0.01'],
+    ['"1 M HCl"', '"HCl",1'],
+  ])("AQ.ADJUST with %s reads as %s", (named, separate) => {
+    const target = named.includes("HCl") ? 4.5 : 5;
+    const a = evaluateFormula(`=AQ.ADJUST(${ACETATE},${target},${named},,"800 L")`);
+    const b = evaluateFormula(`=AQ.ADJUST(${ACETATE},${target},${separate},"800 L")`);
+    expect(a.error).toBeUndefined();
+    expect(a.value).toBe(b.value);
+  });
+
+  test("a stock given twice, or a named stock without a batch volume, is #VALUE! saying so", () => {
+    expect(evaluateFormula(`=AQ.ADJUST(${ACETATE},5,"1 M NaOH",1,"800 L")`).message).toMatch(/already names its stock concentration/);
+    expect(evaluateFormula(`=AQ.ADJUST(${ACETATE},5,"1 M NaOH")`).message).toMatch(/give the batch volume too/);
+  });
+
+  test("AQ.RECIPE reads the same forms", () => {
+    const a = evaluateFormula('=AQ.RECIPE("acetic acid","1 M NaOH",5,0.1,1)');
+    const b = evaluateFormula('=AQ.RECIPE("acetic acid","NaOH 1 M",5,0.1,1)');
+    expect(a.error).toBeUndefined();
+    expect(a.value).toEqual(b.value);
+  });
+});

@@ -9,7 +9,7 @@ import { adjust as adjustMixture } from "../../chem/workflows";
 import { isBlank, plainNumber, quantity, text, type Cell } from "../args";
 import { badInput, finite, orThrow } from "../errors";
 import { readMixtureArgs } from "../mixture";
-import { resolveComponent } from "../substances";
+import { resolveWithStock } from "./stock-name";
 import { chemOptions } from "./options";
 
 export function adjust(
@@ -25,14 +25,21 @@ export function adjust(
 ): number {
   const { mixture } = readMixtureArgs(names, amounts);
   const target = plainNumber(targetPH, "target_pH");
-  const component = resolveComponent(text(titrant, "titrant"));
+  // one reader for titrants with their stock in the name ("1 M HCl", "HCl 1 M"), shared with AQ.RECIPE
+  const titrantName = text(titrant, "titrant");
+  const named = resolveWithStock(titrantName, "titrant");
+  const component = named.component;
+  if (named.stockConc !== undefined) {
+    if (!isBlank(titrantConc)) throw badInput(`the titrant '${titrantName}' already names its stock concentration: leave titrant_conc blank, or name the titrant without one`);
+    if (isBlank(volume)) throw badInput(`the titrant '${titrantName}' names a stock: give the batch volume too (the result is then litres of stock), or name the titrant without a concentration for mol per litre`);
+  }
   const options = { ...chemOptions(temperature, activity), ...(isBlank(measuredPH) ? {} : { measuredPH: plainNumber(measuredPH, "measured_pH") }) };
-  if (isBlank(titrantConc) && isBlank(volume)) {
+  if (named.stockConc === undefined && isBlank(titrantConc) && isBlank(volume)) {
     return finite(orThrow(adjustMixture(mixture, component, target, options)).value, "titrant amount");
   }
-  if (isBlank(titrantConc)) throw badInput("volume needs titrant_conc: give the stock concentration too, or leave both out for mol per litre");
+  if (named.stockConc === undefined && isBlank(titrantConc)) throw badInput("volume needs titrant_conc: give the stock concentration too, or leave both out for mol per litre");
   if (isBlank(volume)) throw badInput("titrant_conc needs volume: give the batch volume too (the result is then litres of stock), or leave both out for mol per litre");
-  const conc = quantity(titrantConc, "titrant_conc", "concentration", { molarMass: component.molarMass });
+  const conc = named.stockConc ?? quantity(titrantConc, "titrant_conc", "concentration", { molarMass: component.molarMass });
   const litres = quantity(volume, "volume", "volume");
   const stock = { conc, volume: litres };
   return finite(orThrow(adjustMixture(mixture, component, target, { ...options, stock })).value, "litres of stock");
