@@ -19,7 +19,8 @@
  *
  * Output per component: mol for the batch (mol/L × V); grams = molar mass × mol when the molar mass
  * is known and no stock is named; litres of stock = mol / stock concentration when a stock
- * concentration is given for the component (liquids such as hydrochloric acid).
+ * concentration is given for the component (liquids such as hydrochloric acid). Stocks that would
+ * fill the batch are refused with the largest total concentration they allow (recipe-stock-room.ts).
  */
 import { fail, fmt } from "../failure";
 import { ionicLimitFailure } from "../ionic-limit";
@@ -29,6 +30,7 @@ import { resolveOptions } from "../validate-options";
 import { brentRoot } from "./brent";
 import { maxAddable } from "./mixing";
 import { planBuffer, solveBuffer, type BufferPlan } from "./recipe-buffer";
+import { checkStockRoom } from "./recipe-stock-room";
 import { checkComponent, checkPositive, checkTargetPH } from "./validate";
 
 export interface RecipeRequest {
@@ -196,8 +198,14 @@ function roleOf(plan: BufferPlan, c: Component, index: number): RecipeLine["role
   return c === plan.titrant ? "titrant" : index === 0 ? "acid form" : "base form";
 }
 
-/** Recipe for a buffer batch: amounts of each component, with grams or litres of stock. */
+/** Recipe for a buffer batch: amounts of each component, with grams or litres of stock (which must leave room in the batch). */
 export function recipe(req: RecipeRequest, opts: ChemOptions = {}): RecipeResult {
+  const r = recipeAsListed(req, opts);
+  if (!r.ok) return r;
+  return checkStockRoom(req, r, (totalConc) => recipeAsListed({ ...req, totalConc }, opts));
+}
+
+function recipeAsListed(req: RecipeRequest, opts: ChemOptions): RecipeResult {
   const o = resolveOptions(opts);
   if (!o.ok) return o;
   const bad = checkRequest(req);

@@ -1,0 +1,75 @@
+/**
+ * Issue 14 ("every verdict, limit and message tells the truth"): each case of the issue as a formula
+ * typed by a user, evaluated through the headless spreadsheet engine (HyperFormula), asserting the
+ * value or message against an identity of the engine itself (the same quantity computed another way)
+ * or the rule the docs state. Items whose cases are already tested elsewhere say where.
+ */
+import { evaluateFormula, type CellResult } from "../../src/cli/evaluate";
+
+function num(formula: string): number {
+  const r = evaluateFormula(formula);
+  expect({ formula, error: r.error, message: r.message }).toEqual({ formula, error: undefined, message: undefined });
+  expect(typeof r.value).toBe("number");
+  return r.value as number;
+}
+
+function table(formula: string): CellResult[][] {
+  const r = evaluateFormula(formula);
+  expect({ formula, error: r.error, message: r.message }).toEqual({ formula, error: undefined, message: undefined });
+  return r.value as CellResult[][];
+}
+
+function refusal(formula: string): { error?: string; message: string } {
+  const r = evaluateFormula(formula);
+  return { error: r.error, message: r.message ?? "" };
+}
+
+/** Litres of stock listed by a RECIPE table (column 4), summed. */
+function stockLitres(rows: CellResult[][]): number {
+  return rows.slice(1).reduce((sum: number, row) => sum + (typeof row[3] === "number" ? row[3] : 0), 0);
+}
+
+describe("item 4: AQ.RECIPE refuses a stock too dilute for the batch, with the largest total it allows", () => {
+  const cases = [
+    // formula parts: acid, base stock (mol/L), target, total, volume, tail; per-litre NaOH from AQ.ADJUST for the same batch
+    { formula: '=AQ.RECIPE("acetic acid","NaOH 0.01 M",5,0.1,1)', stock: 0.01, volume: 1, at: (c: number) => `=AQ.RECIPE("acetic acid","NaOH 0.01 M",5,${c},1)`, perLitre: '=AQ.ADJUST("acetic acid",0.1,5,"NaOH")' },
+    { formula: '=AQ.RECIPE("citric acid monohydrate","NaOH 0.02 M",6,0.05,2)', stock: 0.02, volume: 2, at: (c: number) => `=AQ.RECIPE("citric acid monohydrate","NaOH 0.02 M",6,${c},2)`, perLitre: '=AQ.ADJUST("citric acid monohydrate",0.05,6,"NaOH")' },
+    { formula: '=AQ.RECIPE("acetic acid","NaOH 0.05 M",5,0.1,1,25,0.2)', stock: 0.05, volume: 1, at: (c: number) => `=AQ.RECIPE("acetic acid","NaOH 0.05 M",5,${c},1,25,0.2)`, perLitre: null },
+  ];
+
+  test.each(cases)("$formula → #N/A: too dilute, the litres it would need, the largest total concentration", ({ formula, stock, volume, at, perLitre }) => {
+    const r = refusal(formula);
+    expect(r.error).toBe("#N/A");
+    const m = /The stock is too dilute: ([\d.]+) L of sodium hydroxide ([\d.]+) mol\/L for a ([\d.]+) L batch; it allows a total concentration of at most ([\d.]+) mol\/L\./.exec(r.message);
+    expect({ formula, message: r.message, matched: m !== null }).toEqual({ formula, message: r.message, matched: true });
+    const [, litresText, stockText, volumeText, mostText] = m as RegExpExecArray;
+    expect(Number(stockText)).toBe(stock);
+    expect(Number(volumeText)).toBe(volume);
+    const litres = Number(litresText);
+    expect(litres).toBeGreaterThanOrEqual(volume);
+    // the litres quoted are the titrant the batch needs per litre (AQ.ADJUST, no stock: no dilution,
+    // as in a batch made up to volume) × volume ÷ stock concentration, to the 6 digits quoted
+    if (perLitre !== null) expect(Math.abs(litres - (num(perLitre) * volume) / stock)).toBeLessThanOrEqual(5e-6 * litres);
+    // the largest total concentration, to its 4 digits: at it the stock fits, one step in the 4th digit above it does not
+    const most = Number(mostText);
+    expect(mostText.replace(/^0\.0*/, "").replace(".", "").length).toBeLessThanOrEqual(4);
+    const fits = table(at(most));
+    expect(stockLitres(fits)).toBeLessThan(volume);
+    expect(stockLitres(fits)).toBeGreaterThan(0.999 * volume);
+    const step = 10 ** (Math.floor(Math.log10(most)) - 3);
+    const above = refusal(at(Number((most + step).toPrecision(4))));
+    expect(above.error).toBe("#N/A");
+    expect(above.message).toMatch(new RegExp(`The stock is too dilute: .* at most ${mostText.replace(".", "\\.")} mol/L`));
+  });
+
+  test("a stock that fits is listed as before (1 M NaOH: 68.6 mL for the 1 L acetate batch)", () => {
+    const rows = table('=AQ.RECIPE("acetic acid","NaOH 1 M",5,0.1,1)');
+    expect(Math.abs(stockLitres(rows) - num('=AQ.ADJUST("acetic acid",0.1,5,"NaOH")'))).toBeLessThan(1e-12);
+  });
+
+  test("two stocks count together (together 1.25 L for 1 L; exactly 1 L at 0.2 mol/L, which reaches the batch volume)", () => {
+    const r = refusal('=AQ.RECIPE("acetic acid 0.2 M","sodium acetate 0.2 M",5,0.25,1)');
+    expect(r.error).toBe("#N/A");
+    expect(r.message).toMatch(/L of acetic acid 0\.2 mol\/L \+ [\d.]+ L of sodium acetate 0\.2 mol\/L for a 1 L batch; it allows a total concentration of at most 0\.1999 mol\/L/);
+  });
+});
