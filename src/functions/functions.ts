@@ -55,7 +55,7 @@ export function PH(names: any[][], amounts: any[][], temperature?: any[][], acti
  * @param names Substance names of the mixture as it is now.
  * @param amounts Concentrations, mol/L (or unit text), same shape as names.
  * @param target_pH The pH to reach.
- * @param titrant Name of the titrant (NaOH, HCl, or any library substance).
+ * @param titrant Name of the titrant (NaOH, HCl, or any library substance), optionally with its stock ("1 M HCl") or as a concentrated reagent by mass fraction ("HCl 37 % w/w", "NaOH 50 %"; density tables at 20 °C).
  * @param [titrant_conc] Stock concentration of the titrant, mol/L. With volume, the result is litres of stock.
  * @param [volume] Batch volume, L (or unit text such as "800 L"). Needs titrant_conc.
  * @param [temperature] Temperature, °C (0–100). Default 25.
@@ -207,8 +207,8 @@ export function MOLARMASS(substance: string): number {
  * Recipe for a buffer batch: what to weigh (or measure) of each component to reach a target pH and total concentration.
  * @customfunction RECIPE
  * @helpurl https://localhost:3000/help/recipe.html
- * @param acid_form The acidic form (e.g. "NaH2PO4·H2O", "L-histidine monohydrochloride monohydrate", "Tris HCl"), or a strong acid titrant ("HCl", "HCl 1 M") with a basic form.
- * @param base_form The basic form (e.g. "Na2HPO4·7H2O", "L-histidine", "Tris"), or a strong base titrant ("NaOH", "NaOH 1 M") with an acidic form.
+ * @param acid_form The acidic form (e.g. "NaH2PO4·H2O", "L-histidine monohydrochloride monohydrate", "Tris HCl", "phosphoric acid 85 %"), or a strong acid titrant ("HCl", "HCl 1 M", "HCl 37 % w/w") with a basic form.
+ * @param base_form The basic form (e.g. "Na2HPO4·7H2O", "L-histidine", "Tris", "ammonia 25 %"), or a strong base titrant ("NaOH", "NaOH 1 M", "NaOH 50 % w/w") with an acidic form.
  * @param target_pH The pH to reach.
  * @param total_conc Total buffer concentration (the acid–base system), mol/L or unit text.
  * @param volume Batch volume, L or unit text.
@@ -218,7 +218,7 @@ export function MOLARMASS(substance: string): number {
  * @param [activity] Activity model: "davies" (default), "ideal" or "debye-huckel".
  * @param [other_names] Other components of the batch held at fixed amounts (salts, sugars, surfactants, a second buffer), one per cell.
  * @param [other_amounts] Concentration of each other component in the batch, mol/L or unit text; same shape as other_names.
- * @returns A table with a header row: component, mol, grams (solids) or litres (liquid stocks); the other components follow the buffer.
+ * @returns A table with a header row: component, mol, grams (solids) or litres (liquid stocks; a concentrated reagent by mass fraction gives both, as supplied); the other components follow the buffer.
  */
 export function RECIPE(
   acid_form: string,
@@ -242,8 +242,8 @@ export function RECIPE(
  * @helpurl https://localhost:3000/help/curve.html
  * @param names Substance names of the mixture.
  * @param amounts Concentrations, mol/L (or unit text), same shape as names.
- * @param titrant Name of the titrant (e.g. "NaOH").
- * @param titrant_conc Stock concentration of the titrant, mol/L or unit text.
+ * @param titrant Name of the titrant (e.g. "NaOH"), or with its stock ("0.1 M NaOH", "HCl 37 % w/w": volumes are then of the reagent as supplied).
+ * @param titrant_conc Stock concentration of the titrant, mol/L or unit text; empty ("") when the titrant names its stock.
  * @param volume Starting volume of the mixture, L or unit text.
  * @param max_titrant_volume Largest titrant volume to add, L or unit text.
  * @param [points] Number of points, 2–1000. Default 51.

@@ -43,7 +43,7 @@ export interface ReferenceCase {
   /** pK cases: the acid–base system and its step (counted from 1). */
   system?: string;
   step?: number;
-  /** Molar-mass cases: the form named, and the factor the printed value is per (0.1 for g/L of a 0.1 M solution). */
+  /** Molar-mass cases: the form named, and the factor (reagent-molarity cases: the reagent as a user names it, "HCl 37 % w/w") the printed value is per (0.1 for g/L of a 0.1 M solution). */
   substance?: string;
   factor?: number;
   unit?: string;
@@ -63,7 +63,7 @@ export interface ReferenceCase {
 export interface ReferenceTable {
   id: string;
   title: string;
-  quantity: "pH" | "beta" | "pKw" | "pKw-density" | "pK" | "molar-mass" | "debye-huckel-A";
+  quantity: "pH" | "beta" | "pKw" | "pKw-density" | "pK" | "molar-mass" | "debye-huckel-A" | "reagent-molarity";
   unit: string;
   source: string;
   locator: string;

@@ -19,8 +19,10 @@
  *
  * Output per component: mol for the batch (mol/L × V); grams = molar mass × mol when the molar mass
  * is known and no stock is named; litres of stock = mol / stock concentration when a stock
- * concentration is given for the component (liquids such as hydrochloric acid). Stocks that would
- * fill the batch are refused with the largest total concentration they allow (recipe-stock-room.ts).
+ * concentration is given for the component (liquids such as hydrochloric acid), and with them the
+ * grams of the reagent as supplied when the stock is a concentrated reagent given by mass fraction.
+ * Stocks that would fill the batch are refused with the largest total concentration they allow
+ * (recipe-stock-room.ts).
  */
 import { fail, fmt } from "../failure";
 import { ionicLimitFailure } from "../ionic-limit";
@@ -51,6 +53,12 @@ export interface RecipeRequest {
   background?: Mixture;
   /** Stock concentrations, mol/L, by component id: those components are given in litres of stock. */
   stocks?: Record<string, number>;
+  /**
+   * g of stock per mol of the component, by component id, for a stock that is a concentrated reagent
+   * sold by mass fraction (chem/reagents.ts: M / w): those lines also give grams of the reagent as
+   * supplied.
+   */
+  stockGramsPerMol?: Record<string, number>;
 }
 
 export interface RecipeLine {
@@ -61,7 +69,7 @@ export interface RecipeLine {
   conc: number;
   /** mol for the batch. */
   mol: number;
-  /** g for the batch (molar mass known, no stock given). */
+  /** g for the batch (molar mass known, no stock given); g of the reagent as supplied for a stock given by mass fraction. */
   grams?: number;
   /** L of stock for the batch (stock concentration given). */
   litres?: number;
@@ -221,8 +229,11 @@ function recipeAsListed(req: RecipeRequest, opts: ChemOptions): RecipeResult {
     const mol = e.conc * req.volume;
     const stock = req.stocks?.[e.component.id];
     const line: RecipeLine = { role: batch.roles[i], name: e.component.name, component: e.component, conc: e.conc, mol };
-    if (stock !== undefined) line.litres = mol / stock;
-    else if (e.component.molarMass !== undefined) line.grams = mol * e.component.molarMass;
+    const gramsPerMol = req.stockGramsPerMol?.[e.component.id];
+    if (stock !== undefined) {
+      line.litres = mol / stock;
+      if (gramsPerMol !== undefined) line.grams = mol * gramsPerMol;
+    } else if (e.component.molarMass !== undefined) line.grams = mol * e.component.molarMass;
     return line;
   });
   return { ok: true, mode: plan.mode, lines, mixture: batch.entries, pH: batch.pH, ionicStrength: batch.ionicStrength, warnings: batch.warnings };

@@ -11,10 +11,10 @@
  * system, which is why both are given and neither is called the other.
  */
 import { curve as curveOf } from "../../chem/workflows";
-import { plainNumber, quantity, text, type Cell } from "../args";
-import { finite, orThrow, refusedCell } from "../errors";
+import { isBlank, plainNumber, quantity, text, type Cell } from "../args";
+import { badInput, finite, orThrow, refusedCell } from "../errors";
 import { readMixtureArgs } from "../mixture";
-import { resolveComponent } from "../substances";
+import { resolveWithStock } from "./stock-name";
 import { chemOptions } from "./options";
 
 export const CURVE_HEADER = ["titrant volume (L)", "pH", "marked point", "marked volume (L)", "marked pH"];
@@ -31,8 +31,14 @@ export function curve(
   activity: Cell,
 ): unknown[][] {
   const { mixture } = readMixtureArgs(names, amounts);
-  const component = resolveComponent(text(titrant, "titrant"));
-  const stockConc = quantity(titrantConc, "titrant_conc", "concentration", { molarMass: component.molarMass });
+  // the titrant may name its stock, as in ADJUST and RECIPE: "0.1 M NaOH", "HCl 37 % w/w" (volumes are then of the reagent as supplied)
+  const titrantName = text(titrant, "titrant");
+  const named = resolveWithStock(titrantName, "titrant");
+  const component = named.component;
+  if (named.stockConc !== undefined && !isBlank(titrantConc)) {
+    throw badInput(`the titrant '${titrantName}' already names its stock concentration: leave titrant_conc blank, or name the titrant without one`);
+  }
+  const stockConc = named.stockConc ?? quantity(titrantConc, "titrant_conc", "concentration", { molarMass: component.molarMass });
   const initial = quantity(volume, "volume", "volume");
   const maxVolume = quantity(maxTitrantVolume, "max_titrant_volume", "volume");
   const n = plainNumber(points, "points", 51);

@@ -2,7 +2,9 @@
  * AQ.RECIPE: what to weigh for a buffer batch, as a table with a header row:
  *   component | mol | grams | litres of stock
  * grams = molar mass × mol (hydrate water included) for a solid; for a component named with a
- * stock concentration ("HCl 1 M", "1 M NaOH") the litres of that stock instead. Make up to the batch
+ * stock concentration ("HCl 1 M", "1 M NaOH") the litres of that stock instead; for a concentrated
+ * reagent by mass fraction ("HCl 37 % w/w", "glacial acetic acid") the litres and the grams of the
+ * reagent as supplied, the row naming its mass fraction, molarity and density. Make up to the batch
  * volume with water. The forms are a conjugate pair of one system (x + y = total_conc solved for the
  * pH), or one form and a strong titrant (the titrant from the adjust workflow); with ionic_strength
  * the salt (default NaCl) is added so that the solved ionic strength equals it. other_names and
@@ -16,7 +18,7 @@ import { AqError, badInput, finite, orThrow } from "../errors";
 import { readEntries } from "../mixture";
 import { resolveComponent } from "../substances";
 import { chemOptions } from "./options";
-import { resolveWithStock } from "./stock-name";
+import { reagentLabel, resolveWithStock, type NamedStock } from "./stock-name";
 
 export const RECIPE_HEADER = ["component", "mol", "grams", "litres of stock"];
 
@@ -37,8 +39,15 @@ export function recipe(
   const base = resolveWithStock(text(baseForm, "base_form"), "base_form");
   if (acid.component.id === base.component.id) throw badInput(`acid_form and base_form are the same substance ('${acid.component.name}'): give two forms, or a form and a titrant`);
   const stocks: Record<string, number> = {};
-  if (acid.stockConc !== undefined) stocks[acid.component.id] = acid.stockConc;
-  if (base.stockConc !== undefined) stocks[base.component.id] = base.stockConc;
+  const stockGramsPerMol: Record<string, number> = {};
+  const labels = new Map<string, string>();
+  for (const named of [acid, base] as NamedStock[]) {
+    if (named.stockConc !== undefined) stocks[named.component.id] = named.stockConc;
+    if (named.reagent) {
+      stockGramsPerMol[named.component.id] = named.reagent.gramsPerMol;
+      labels.set(named.component.id, reagentLabel(named.component, named.reagent));
+    }
+  }
   const req: RecipeRequest = {
     acidForm: acid.component,
     baseForm: base.component,
@@ -46,6 +55,7 @@ export function recipe(
     totalConc: quantity(totalConc, "total_conc", "concentration"),
     volume: quantity(volume, "volume", "volume"),
     stocks,
+    stockGramsPerMol,
   };
   const background = readBackground(otherNames, otherAmounts);
   if (background.length > 0) req.background = background;
@@ -59,7 +69,7 @@ export function recipe(
   const rows: unknown[][] = [RECIPE_HEADER];
   for (const line of r.lines) {
     rows.push([
-      line.name,
+      labels.get(line.component.id) ?? line.name,
       finite(line.mol, "mol"),
       line.grams === undefined ? "" : finite(line.grams, "grams"),
       line.litres === undefined ? "" : finite(line.litres, "litres"),
