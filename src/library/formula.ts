@@ -10,7 +10,14 @@ export type FormulaResult = { ok: true; counts: ElementCounts } | { ok: false; c
 
 export type MolarMassResult =
   | { ok: true; value: number }
-  | { ok: false; code: "bad-formula" | "unknown-element"; message: string };
+  | { ok: false; code: "bad-formula" | "unknown-element" | "too-large"; message: string };
+
+/**
+ * The largest molar mass an entry may have, g/mol, computed from a formula or typed: the same limit
+ * as the JSON Schema's maximum for a typed molarMass (library.schema.json; a test holds them equal).
+ * Large proteins and polymers are below 1e6 g/mol; a formula beyond it is a typing error.
+ */
+export const MAX_MOLAR_MASS = 1e6;
 
 const SEPARATORS = new Set(["·", ".", "*"]);
 
@@ -90,6 +97,10 @@ export function molarMassOf(formula: string, weights: ReadonlyMap<string, number
     const w = weights.get(el);
     if (w === undefined) return { ok: false, code: "unknown-element", message: `no atomic weight for element '${el}' in formula '${formula}'` };
     sum += n * w;
+  }
+  if (!(sum <= MAX_MOLAR_MASS)) {
+    const shown = Number.isFinite(sum) ? `${sum.toExponential(4)} g/mol` : "more than any number";
+    return { ok: false, code: "too-large", message: `formula '${formula}' gives a molar mass of ${shown}, above the ${MAX_MOLAR_MASS.toLocaleString("en-US")} g/mol an entry may have (the same limit as a typed molar mass): check the counts in the formula` };
   }
   return { ok: true, value: sum };
 }

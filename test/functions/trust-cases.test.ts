@@ -5,6 +5,9 @@
  * or the rule the docs state. Items whose cases are already tested elsewhere say where.
  */
 import { evaluateFormula, type CellResult } from "../../src/cli/evaluate";
+import { resetActiveLibrary, setLayer } from "../../src/library";
+import { BUILTIN_LIBRARY } from "../../src/library/builtin";
+import { halvorsenLibrary } from "../library/helpers";
 
 function num(formula: string): number {
   const r = evaluateFormula(formula);
@@ -71,5 +74,50 @@ describe("item 4: AQ.RECIPE refuses a stock too dilute for the batch, with the l
     const r = refusal('=AQ.RECIPE("acetic acid 0.2 M","sodium acetate 0.2 M",5,0.25,1)');
     expect(r.error).toBe("#N/A");
     expect(r.message).toMatch(/L of acetic acid 0\.2 mol\/L \+ [\d.]+ L of sodium acetate 0\.2 mol\/L for a 1 L batch; it allows a total concentration of at most 0\.1999 mol\/L/);
+  });
+});
+
+describe("item 6: a formula-derived molar mass has the cap of a typed one (1e6 g/mol)", () => {
+  afterEach(() => resetActiveLibrary());
+  const heavy = () => {
+    const doc = halvorsenLibrary();
+    (doc.substances ?? [])[0].formula = "H999999999999999999999O";
+    return doc;
+  };
+  const CAP = /formula 'H999999999999999999999O' gives a molar mass of 1\.0080e\+21 g\/mol, above the 1,000,000 g\/mol an entry may have \(the same limit as a typed molar mass\)/;
+
+  test("importing or saving such an entry is refused, saying why; the library stays as it was", () => {
+    const r = setLayer("workbook", heavy());
+    expect(r.ok).toBe(false);
+    expect(r.ok ? "" : r.message).toMatch(CAP);
+    expect(evaluateFormula('=AQ.MOLARMASS("HBS-7")').error).toBe("#VALUE!");
+  });
+
+  test("a stored workbook library carrying it keeps its other entries; =AQ.MOLARMASS and =AQ.RECIPE on it are #VALUE! with the reason", () => {
+    expect(setLayer("workbook", heavy(), { ignoreReferences: true }).ok).toBe(true);
+    for (const formula of ['=AQ.MOLARMASS("HBS-7")', '=AQ.RECIPE("HBS-7","HCl",7,0.05,1)']) {
+      const r = refusal(formula);
+      expect(r.error).toBe("#VALUE!");
+      expect(r.message).toMatch(/'HBS-7' \(workbook library\) cannot be used: /);
+      expect(r.message).toMatch(CAP);
+    }
+  });
+
+  test("a typed molar mass above the cap is refused by the same number", () => {
+    const doc = halvorsenLibrary();
+    const entry = (doc.substances ?? [])[0];
+    delete entry.formula;
+    entry.molarMass = { value: 1.2e6, unit: "g/mol", status: "entered" } as never;
+    const r = setLayer("workbook", doc);
+    expect(r.ok).toBe(false);
+    expect(r.ok ? "" : r.message).toMatch(/molarMass\.value: .*1000000/);
+  });
+
+  test("the same entry with its true formula is a molar mass", () => {
+    expect(setLayer("workbook", halvorsenLibrary()).ok).toBe(true);
+    // C8H17NNaO4S summed from the built-in library's atomic weights (CIAAW, read from the data)
+    const w = (el: string) => (BUILTIN_LIBRARY.atomicWeights ?? {})[el].value;
+    const expected = 8 * w("C") + 17 * w("H") + w("N") + w("Na") + 4 * w("O") + w("S");
+    expect(Math.abs(num('=AQ.MOLARMASS("HBS-7")') - expected)).toBeLessThan(1e-9 * expected);
   });
 });

@@ -3,7 +3,8 @@
  * published spot checks (test/reference/molar-masses.json, each with its tolerance and reason).
  */
 import { BUILTIN_LIBRARY } from "../../src/library/builtin";
-import { molarMassOf, parseFormula } from "../../src/library/formula";
+import { MAX_MOLAR_MASS, molarMassOf, parseFormula } from "../../src/library/formula";
+import schema from "../../src/library/schema/library.schema.json";
 import { createLibrary } from "../../src/library/layers";
 import { casesOf } from "../reference";
 
@@ -55,5 +56,22 @@ describe("formula parser", () => {
   test("an element without an atomic weight is an error, not a zero", () => {
     const r = molarMassOf("XeF2", new Map([["F", 18.998]]));
     expect(r).toEqual({ ok: false, code: "unknown-element", message: expect.stringContaining("'Xe'") });
+  });
+});
+
+describe("a formula's molar mass has the same cap as a typed one (issue 14, item 6)", () => {
+  const weights = new Map([["C", 12.011], ["H", 1.008], ["O", 15.999]]);
+  test("the cap is the JSON Schema's maximum for a typed molarMass", () => {
+    expect(schema.$defs.molarMass.properties.value.maximum).toBe(MAX_MOLAR_MASS);
+  });
+  test("just below the cap is a molar mass, just above it is refused with the value and the cap", () => {
+    // 83 000 × 12.011 = 996 913 g/mol; 84 000 × 12.011 = 1 008 924 g/mol
+    expect(molarMassOf("C83000", weights)).toEqual({ ok: true, value: 83000 * 12.011 });
+    const r = molarMassOf("C84000", weights);
+    expect(r).toEqual({ ok: false, code: "too-large", message: expect.stringContaining("gives a molar mass of 1.0089e+6 g/mol, above the 1,000,000 g/mol") });
+  });
+  test("H999999999999999999999O (1.008e21 g/mol) and counts beyond any number are refused", () => {
+    expect(molarMassOf("H999999999999999999999O", weights)).toMatchObject({ ok: false, code: "too-large", message: expect.stringContaining("1.0080e+21 g/mol") });
+    expect(molarMassOf(`H${"9".repeat(400)}`, weights)).toMatchObject({ ok: false, code: "too-large", message: expect.stringContaining("more than any number") });
   });
 });

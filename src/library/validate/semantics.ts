@@ -3,7 +3,7 @@
  * elements that exist (in this file or in the layers below it), species-name counts, formulas that
  * parse, charge balance of each weighed form, and lookup names that mean one substance only.
  */
-import { parseFormula } from "../formula";
+import { molarMassOf, parseFormula } from "../formula";
 import { normalizeName } from "../normalize";
 import type { IonRecord, LibraryDoc, SourceRecord, SubstanceRecord, SystemRecord, ValidationIssue, ValueRecord } from "../types";
 import { nameCharacterProblem } from "./name-chars";
@@ -20,6 +20,8 @@ export interface World {
   systems: ReadonlyMap<string, SystemRecord>;
   ions: ReadonlyMap<string, IonRecord>;
   elements: ReadonlySet<string>;
+  /** Atomic weights by element, g/mol (the later doc's value). */
+  atomicWeights: ReadonlyMap<string, number>;
 }
 
 /** Build the reference world from docs, later docs overriding earlier ones. */
@@ -28,13 +30,17 @@ export function worldOf(docs: readonly LibraryDoc[]): World {
   const systems = new Map<string, SystemRecord>();
   const ions = new Map<string, IonRecord>();
   const elements = new Set<string>();
+  const atomicWeights = new Map<string, number>();
   for (const d of docs) {
     for (const [k, v] of Object.entries(d.sources ?? {})) sources.set(k, v);
     for (const s of d.systems ?? []) systems.set(s.id, s);
     for (const i of d.ions ?? []) ions.set(i.id, i);
-    for (const el of Object.keys(d.atomicWeights ?? {})) elements.add(el);
+    for (const [el, w] of Object.entries(d.atomicWeights ?? {})) {
+      elements.add(el);
+      if (typeof w?.value === "number") atomicWeights.set(el, w.value);
+    }
   }
-  return { sources, systems, ions, elements };
+  return { sources, systems, ions, elements, atomicWeights };
 }
 
 function checkValue(v: ValueRecord | undefined, path: string, world: World, out: SemanticIssue[]): void {
@@ -90,6 +96,12 @@ export function checkSubstance(s: SubstanceRecord, path: string, world: World, o
     else {
       const missing = [...parsed.counts.keys()].filter((el) => !world.elements.has(el));
       if (missing.length) out.push({ path: childPath(path, "formula"), message: `no atomic weight for ${missing.map((e) => `'${e}'`).join(", ")}`, reference: true });
+      else {
+        const m = molarMassOf(s.formula, world.atomicWeights);
+        // it depends on atomic weights, which another layer may change: like a reference, a stored
+        // layer keeps its other entries and this one is listed as unusable with the message
+        if (!m.ok && m.code === "too-large") out.push({ path: childPath(path, "formula"), message: m.message, reference: true });
+      }
     }
   }
   const releases = (s.systems?.length ?? 0) + (s.ions?.length ?? 0);
