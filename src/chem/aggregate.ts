@@ -9,6 +9,7 @@
 import { DEFAULTS } from "./defaults";
 import { fail, fmt } from "./failure";
 import type { AcidBaseSystem, Failure, Mixture, StrongIon } from "./types";
+import { complexProblem, sameComplexes } from "./complexation";
 
 export interface Aggregate {
   ok: true;
@@ -51,13 +52,17 @@ function checkSystem(sys: AcidBaseSystem, where: string): Failure | null {
   if (sys.speciesNames !== undefined && sys.speciesNames.length !== sys.steps.length + 1) {
     return fail("bad-input", `${where}: system "${sys.id}" needs ${sys.steps.length + 1} species names, has ${sys.speciesNames.length}.`);
   }
+  if (sys.complexes !== undefined) {
+    const problem = complexProblem(sys);
+    if (problem !== null) return fail("bad-input", `${where}: system "${sys.id}": ${problem}`);
+  }
   return null;
 }
 
 function sameSystem(a: AcidBaseSystem, b: AcidBaseSystem): boolean {
   if (a === b) return true;
   if (a.topCharge !== b.topCharge || a.steps.length !== b.steps.length) return false;
-  return a.steps.every((s, j) => s.pKa === b.steps[j].pKa && s.dH === b.steps[j].dH && s.dCp === b.steps[j].dCp);
+  return a.steps.every((s, j) => s.pKa === b.steps[j].pKa && s.dH === b.steps[j].dH && s.dCp === b.steps[j].dCp) && sameComplexes(a.complexes, b.complexes);
 }
 
 /** Validates and aggregates a mixture. */

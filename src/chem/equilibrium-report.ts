@@ -10,6 +10,8 @@ import { classifyRegime } from "./regime";
 import type { ChargeBalanceSolver } from "./solver-core";
 import { speciesName } from "./species-names";
 import type { Equilibrium, Failure, Species } from "./types";
+import { ComplexingSolver } from "./complex-solver";
+import { complexBufferValue, complexEnthalpyWarnings, complexingSystemSpecies, freeMetal, innerFailureMessage } from "./complex-report";
 import { pKw } from "./water";
 import { ionicStrengthWarning, missingEnthalpyWarnings } from "./warnings";
 
@@ -22,16 +24,36 @@ export function buildEquilibrium(core: ChargeBalanceSolver, agg: Aggregate): Equ
     { name: "H+", systemId: null, charge: 1, conc: h, fraction: 1 },
     { name: "OH-", systemId: null, charge: -1, conc: oh, fraction: 1 },
   ];
+  const cx = core instanceof ComplexingSolver ? core : null;
+  if (cx) {
+    const bad = innerFailureMessage(cx);
+    if (bad) return fail("no-convergence", bad);
+  }
   let chargeSum = h - oh;
   let largest = Math.max(h, oh);
-  for (const { ion, conc } of agg.ions) {
-    species.push({ name: ion.name, systemId: null, charge: ion.charge, conc, fraction: 1 });
+  agg.ions.forEach(({ ion, conc: total }, i) => {
+    const free = cx ? freeMetal(cx, i) : null;
+    const conc = free ? free.conc : total;
+    const sp: Species = { name: ion.name, systemId: null, charge: ion.charge, conc, fraction: free ? free.fraction : 1 };
+    if (free) sp.metalId = ion.id;
+    species.push(sp);
     chargeSum += ion.charge * conc;
     largest = Math.max(largest, Math.abs(ion.charge * conc));
-  }
+  });
+  const metalIds = cx ? cx.setup.metals.map((i) => agg.ions[i].ion.id) : [];
   let hasSystem = false;
   for (let s = 0; s < core.nSys; s++) {
     const sys = agg.systems[s];
+    const own = cx ? complexingSystemSpecies(cx, sys, s, metalIds) : null;
+    if (own) {
+      hasSystem = true;
+      for (const sp of own) {
+        species.push(sp);
+        chargeSum += sp.charge * sp.conc;
+        largest = Math.max(largest, Math.abs(sp.charge * sp.conc));
+      }
+      continue;
+    }
     const C = core.total(s);
     if (C > 0) hasSystem = true;
     const n = core.stepCount(s);
@@ -50,7 +72,7 @@ export function buildEquilibrium(core: ChargeBalanceSolver, agg: Aggregate): Equ
       largest = Math.max(largest, Math.abs(charge * conc));
     }
   }
-  const beta = bufferValue(core);
+  const beta = cx ? complexBufferValue(cx) : bufferValue(core);
   const gammaH = Math.exp(core.lnGamma1);
   const pH = -(x + core.lnGamma1) / LN10;
   const pcH = -x / LN10;
@@ -64,6 +86,7 @@ export function buildEquilibrium(core: ChargeBalanceSolver, agg: Aggregate): Equ
   const wI = ionicStrengthWarning(I, core.model);
   if (wI) warnings.push(wI);
   warnings.push(...missingEnthalpyWarnings(agg.systems, agg.totals, core.temperatureC, pH));
+  if (cx) warnings.push(...complexEnthalpyWarnings(cx, species));
   return {
     ok: true,
     pH,

@@ -6,6 +6,7 @@ export type {
   ActivityModel,
   PkaStep,
   AcidBaseSystem,
+  ComplexSpecies,
   StrongIon,
   Component,
   MixtureEntry,

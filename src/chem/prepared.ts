@@ -14,6 +14,8 @@ import type { ChemOptions, Equilibrium, Failure, Mixture, PHResult } from "./typ
 import { resolveOptions } from "./validate-options";
 import { SOLVER } from "./defaults";
 import { ionicLimitFailure } from "./ionic-limit";
+import { complexSetup } from "./complexation";
+import { ComplexingSolver } from "./complex-solver";
 
 export class PreparedMixture {
   readonly ok = true as const;
@@ -22,6 +24,12 @@ export class PreparedMixture {
 
   constructor(agg: Aggregate) {
     this.aggregate = agg;
+    // Complexes (metal ions with chelators, polyborates): their own solver; otherwise the plain one.
+    const setup = complexSetup(agg);
+    if (setup !== null) {
+      this.core = new ComplexingSolver(agg, setup);
+      return;
+    }
     let q = 0;
     let zz = 0;
     let abs = 0;
@@ -37,7 +45,7 @@ export class PreparedMixture {
     const o = resolveOptions(opts);
     if (!o.ok) return o;
     this.core.setTemperature(o.temperatureC);
-    if (!solveCoupled(this.core, o.activity)) {
+    if (!solveCoupled(this.core, o.activity) || (this.core instanceof ComplexingSolver && !this.core.innerOk)) {
       return fail(
         "no-convergence",
         `The ionic strength did not converge in ${SOLVER.maxIonicStrengthIterations} iterations (last I = ${fmt(this.core.ionicStrength)} mol/L); no result is given.`,

@@ -52,8 +52,8 @@ export class ChargeBalanceSolver {
   readonly strongIonic: number;
   /** Σ |z|·c of the strong ions. */
   readonly strongAbs: number;
-  readonly pMax: number;
-  readonly pMin: number;
+  pMax: number;
+  pMin: number;
 
   temperatureC = NaN;
   model: ActivityModel = DEFAULTS.activity; // set by every solve

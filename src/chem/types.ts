@@ -37,6 +37,33 @@ export interface AcidBaseSystem {
   steps: PkaStep[];
   /** Species names from fully protonated to fully deprotonated, length steps.length + 1. */
   speciesNames?: string[];
+  /**
+   * Species this system's fully deprotonated form (the ligand L) forms with a metal ion and/or
+   * protons, or with itself (polyborates). Used when the metal (a strong ion) is in the mixture.
+   */
+  complexes?: ComplexSpecies[];
+}
+
+/**
+ * A species formed from components: M + l·L + p·H⁺ ⇌ M L_l H_p, with the overall formation constant
+ * β = [M L_l H_p]/([M][L]^l[H⁺]^p) at 25 °C and I = 0 (activities). L is the fully deprotonated form
+ * of the system the complex belongs to; M is a strong ion of the mixture (absent for species of the
+ * ligand alone, such as B₃O₃(OH)₄⁻ = 3 B(OH)₄⁻ + 2 H⁺ − 4 H₂O); p may be negative (hydroxo species).
+ * Charge: z(M) + l·z(L) + p.
+ */
+export interface ComplexSpecies {
+  /** Display name ("CaCit-", "B3O3(OH)4-"). */
+  name: string;
+  /** Strong-ion id of the metal ("ca"); absent for species of the ligand alone. One metal ion per species. */
+  metal?: string;
+  /** Ligands per species, an integer ≥ 1. */
+  ligands: number;
+  /** Protons per species (an integer, negative for hydroxo species). */
+  protons: number;
+  /** log10 β at 25 °C and I = 0. */
+  logBeta: number;
+  /** ΔrH° of the formation reaction, kJ/mol. Missing: β held at its 25 °C value. */
+  dH?: number;
 }
 
 /** A fully dissociated ion (Na⁺, K⁺, Cl⁻, Ca²⁺, NO₃⁻ …): it never takes or gives protons. */
@@ -93,8 +120,16 @@ export interface Species {
   charge: number;
   /** mol/L. */
   conc: number;
-  /** Fraction of its system's total (1 for strong ions, H⁺ and OH⁻). */
+  /**
+   * Fraction of its system's total (1 for strong ions, H⁺ and OH⁻); for a complex, the share of its
+   * ligand system's total it holds (ligands × conc / total); for a metal ion that forms complexes,
+   * the free fraction of that metal.
+   */
   fraction: number;
+  /** Strong-ion id of the metal, for a complex with a metal and for a metal ion's free form. */
+  metalId?: string;
+  /** For a complex: the fraction of its metal's total it holds. */
+  metalFraction?: number;
 }
 
 /** Which root the charge balance landed on. */
