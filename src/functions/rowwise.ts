@@ -20,7 +20,7 @@
  */
 import { isBlank, shapeOf, text, type Cell } from "./args";
 import { badInput, guard, toCustomFunctionsError } from "./errors";
-import { readMixtureArgs } from "./mixture";
+import { readMixtureArgs, tableRowReader, withRowMixture } from "./mixture";
 import { resolveComponent } from "./substances";
 
 /** The implementation of a function that gives one value: names, amounts, then its other arguments. */
@@ -120,21 +120,25 @@ export function rowwise(impl: RowImplementation, names: Cell, amounts: Cell, ...
     // One mixture for every row: its errors are the formula's. A table of mixtures: its names are.
     if (amountRows === null) readMixtureArgs(names, amounts);
     else checkNames(names);
+    // Rows of plain numbers are read in place, the names once (mixture.ts, tableRowReader).
+    const reader = amountRows === null ? null : tableRowReader(names);
     const fixed = rest.map((v, i) => (columns[i] === null ? single(v, i) : undefined));
-    const out: unknown[][] = [];
-    const args: Cell[] = new Array(rest.length);
+    const out: unknown[][] = new Array(n);
+    // The call's arguments, filled in place per row (no spread, no closure per row).
+    const call: [Cell, Cell, ...Cell[]] = [names, amounts, ...fixed];
     for (let r = 0; r < n; r++) {
-      const mixtureRow = amountRows === null ? amounts : [amountRows[r]];
       const blank = amountRows !== null ? rowIsBlank(amountRows[r]) : columns.every((col) => col === null || isBlank(col[r][0]));
       if (blank) {
-        out.push([""]);
+        out[r] = [""];
         continue;
       }
-      for (let i = 0; i < rest.length; i++) args[i] = columns[i] === null ? fixed[i] : columns[i]![r][0];
+      if (amountRows !== null) call[1] = [amountRows[r]];
+      for (let i = 0; i < rest.length; i++) if (columns[i] !== null) call[i + 2] = columns[i]![r][0];
       try {
-        out.push([cellOf(impl(names, mixtureRow, ...args))]);
+        const read = reader === null ? null : reader(amountRows![r]);
+        out[r] = [cellOf(read === null ? impl.apply(undefined, call) : withRowMixture(names, call[1], read, impl, call))];
       } catch (error) {
-        out.push([toCustomFunctionsError(error)]);
+        out[r] = [toCustomFunctionsError(error)];
       }
     }
     return out;
