@@ -46,6 +46,14 @@ export const LIMITS = {
   debyeHuckelCaution: 0.1,
   /** mol/L: above this the activity models are unreliable. */
   ionicStrengthStrong: 0.5,
+  /**
+   * mol/L: the "pitzer" model's caution and unreliable thresholds. Its binary parameters hold to
+   * several mol/kg for the salts fitted (Pitzer & Mayorga 1973); the checks here reach I ≈ 1 for
+   * NaCl and KCl (test/reference/pitzer-nacl-kcl.json) and I ≈ 0.6 for phosphate and citrate–
+   * phosphate buffers (README, Validity limits). The hard limit maxIonicStrength stays 1 mol/L.
+   */
+  pitzerCaution: 0.6,
+  pitzerUnreliable: 1,
   /** K: a pKa without ΔrH° is held at its 25 °C value; warn when |T − 25 °C| exceeds this. */
   missingEnthalpyWarnK: 5,
   /**

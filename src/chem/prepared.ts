@@ -16,11 +16,23 @@ import { SOLVER } from "./defaults";
 import { ionicLimitFailure } from "./ionic-limit";
 import { complexSetup } from "./complexation";
 import { ComplexingSolver } from "./complex-solver";
+import { ACTIVITY_MODELS } from "./activity/models";
+import { PitzerState, pitzerBufferValue, solvePitzer } from "./pitzer-iteration";
+import { bufferValue } from "./beta";
 
 export class PreparedMixture {
   readonly ok = true as const;
   readonly aggregate: Aggregate;
   private readonly core: ChargeBalanceSolver;
+  /** The Pitzer ions of this mixture, compiled on the first "pitzer" solve. */
+  private pitzerState: PitzerState | null = null;
+  /** True when the last solve applied the ion-specific (Pitzer) iteration. */
+  private pitzerApplied = false;
+
+  private pitzer(): PitzerState {
+    if (this.pitzerState === null) this.pitzerState = new PitzerState(this.aggregate);
+    return this.pitzerState;
+  }
 
   constructor(agg: Aggregate) {
     this.aggregate = agg;
@@ -45,7 +57,11 @@ export class PreparedMixture {
     const o = resolveOptions(opts);
     if (!o.ok) return o;
     this.core.setTemperature(o.temperatureC);
-    if (!solveCoupled(this.core, o.activity) || (this.core instanceof ComplexingSolver && !this.core.innerOk)) {
+    this.pitzerApplied = ACTIVITY_MODELS[o.activity].ionSpecific && !(this.core instanceof ComplexingSolver);
+    const solved = this.pitzerApplied
+      ? solvePitzer(this.core, this.pitzer(), o.activity)
+      : solveCoupled(this.core, o.activity) && !(this.core instanceof ComplexingSolver && !this.core.innerOk);
+    if (!solved) {
       return fail(
         "no-convergence",
         `The ionic strength did not converge in ${SOLVER.maxIonicStrengthIterations} iterations (last I = ${fmt(this.core.ionicStrength)} mol/L); no result is given.`,
@@ -61,7 +77,29 @@ export class PreparedMixture {
   solve(opts?: ChemOptions): Equilibrium | Failure {
     const bad = this.run(opts) ?? ionicLimitFailure(this.core.ionicStrength);
     if (bad) return bad;
-    return buildEquilibrium(this.core, this.aggregate);
+    return this.report();
+  }
+
+  /** The Equilibrium record of the solved state; under "pitzer" with β by difference and the fallback warnings. */
+  private report(): Equilibrium | Failure {
+    const eq = buildEquilibrium(this.core, this.aggregate);
+    if (!eq.ok) return eq;
+    if (!this.pitzerApplied) {
+      if (ACTIVITY_MODELS[this.core.model].ionSpecific) {
+        eq.warnings.push("The Pitzer model does not cover complexes yet: this mixture is solved with the Davies equation for every ion.");
+      }
+      return eq;
+    }
+    const st = this.pitzer();
+    eq.warnings.push(...st.warnings(this.core.temperatureC));
+    eq.beta = pitzerBufferValue(this.core, st, bufferValue(this.core));
+    if (!Number.isFinite(eq.beta)) return fail("no-convergence", "The buffer value did not converge under the Pitzer model; no result is given.");
+    return eq;
+  }
+
+  /** Osmotic excess Σ m_i(φ − 1) of the ions (mol/kg) at the last "pitzer" solve, or null under another model. */
+  pitzerOsmoticExcess(): number | null {
+    return this.pitzerApplied && this.pitzerState ? this.pitzerState.osmoticExcess : null;
   }
 
   /**
@@ -71,7 +109,7 @@ export class PreparedMixture {
   solveBeyondLimit(opts?: ChemOptions): Equilibrium | Failure {
     const bad = this.run(opts);
     if (bad) return bad;
-    return buildEquilibrium(this.core, this.aggregate);
+    return this.report();
   }
 
   /** Fast path: pH, p[H] and ionic strength only ("beyond-limit" as solve). */

@@ -46,12 +46,12 @@ export class ChargeBalanceSolver {
   readonly at: DataLayout;
   /** Number of steps over all systems. */
   readonly nStepsTotal: number;
-  /** Σ z·c of the strong ions, mol/L. */
-  readonly strongCharge: number;
+  /** Σ z·c of the strong ions, mol/L (shifted only by shiftStrongBase). */
+  strongCharge: number;
   /** ½ Σ z²·c of the strong ions, mol/L. */
-  readonly strongIonic: number;
+  strongIonic: number;
   /** Σ |z|·c of the strong ions. */
-  readonly strongAbs: number;
+  strongAbs: number;
   pMax: number;
   pMin: number;
 
@@ -165,6 +165,35 @@ export class ChargeBalanceSolver {
     const { kc, kaT, exponent } = this.at;
     for (let i = 0; i < this.nStepsTotal; i++) d[kc + i] = d[kaT + i] * Math.exp(twoG * d[exponent + i]);
     this.kwc = this.kwT * Math.exp(-twoG);
+  }
+
+  /**
+   * Sets the conditional constants from each species' own ln γ (an ion-specific model, see
+   * pitzer-iteration.ts): K′a = Ka·γ(acid)/(γH·γ(base)) for every step, K′w = Kw/(γH·γOH).
+   * lnGammaSpecies[firstStep(s) + s + k] is ln γ of the species of system s that has lost k protons;
+   * I is the ionic strength those coefficients belong to; lnGamma1 then holds ln γ(H⁺).
+   */
+  setSpeciesGammas(I: number, lnGammaH: number, lnGammaOH: number, lnGammaSpecies: readonly number[]): void {
+    this.ionicStrength = I;
+    this.lnGamma1 = lnGammaH;
+    const d = this.data;
+    const { kc, kaT, firstStep, stepCount } = this.at;
+    for (let s = 0; s < this.nSys; s++) {
+      const o = d[firstStep + s];
+      const n = d[stepCount + s];
+      const b = o + s;
+      for (let j = 0; j < n; j++) d[kc + o + j] = d[kaT + o + j] * Math.exp(lnGammaSpecies[b + j] - lnGammaH - lnGammaSpecies[b + j + 1]);
+    }
+    this.kwc = this.kwT * Math.exp(-lnGammaH - lnGammaOH);
+  }
+
+  /** Adds delta mol/L of a univalent strong cation (NaOH without volume change; negative removes it). */
+  shiftStrongBase(delta: number): void {
+    this.strongCharge += delta;
+    this.strongIonic += 0.5 * delta;
+    this.strongAbs += delta;
+    this.pMax += delta;
+    this.pMin += delta;
   }
 
   /** d ln γ1 / dI at the current ionic strength. */

@@ -7,8 +7,9 @@ import type { AcidBaseSystem, ActivityModel } from "./types";
 
 /** Ionic strength beyond the activity model's range. */
 export function ionicStrengthWarning(I: number, model: ActivityModel): string | null {
-  if (sideOf(I, LIMITS.ionicStrengthStrong) > 0) {
-    return `Ionic strength ${fmtAgainst(I, [LIMITS.ionicStrengthStrong])} mol/L is above ${LIMITS.ionicStrengthStrong} mol/L: the ${model} activity model is unreliable here, treat the pH as a rough estimate.`;
+  const strong = ACTIVITY_MODELS[model].unreliableAbove;
+  if (sideOf(I, strong) > 0) {
+    return `Ionic strength ${fmtAgainst(I, [strong])} mol/L is above ${strong} mol/L: the ${model} activity model is unreliable here, treat the pH as a rough estimate.`;
   }
   const caution = ACTIVITY_MODELS[model].cautionAbove;
   if (sideOf(I, caution) > 0) {

@@ -41,7 +41,7 @@ import { species as speciesTable } from "./aq/species";
  * @param names Substance names (any alias in the constants library), one per cell; blank cells are ignored.
  * @param amounts Concentration of each substance in the final solution, mol/L, or text with a unit such as "25 mM" or "2.1 g/L"; same shape as names.
  * @param [temperature] Temperature, °C (0–100). Default 25.
- * @param [activity] Activity model: "davies" (default), "ideal" or "debye-huckel".
+ * @param [activity] Activity model: "davies" (default), "ideal", "debye-huckel" or "pitzer".
  * @returns pH (activity scale). Row-wise: names as one row and amounts with one row per mixture give one result per row (a spilled column).
  */
 export function PH(names: any[][], amounts: any[][], temperature?: any[][], activity?: any[][]): any[][] {
@@ -59,7 +59,7 @@ export function PH(names: any[][], amounts: any[][], temperature?: any[][], acti
  * @param [titrant_conc] Stock concentration of the titrant, mol/L. With volume, the result is litres of stock.
  * @param [volume] Batch volume, L (or unit text such as "800 L"). Needs titrant_conc.
  * @param [temperature] Temperature, °C (0–100). Default 25.
- * @param [activity] Activity model: "davies" (default), "ideal" or "debye-huckel".
+ * @param [activity] Activity model: "davies" (default), "ideal", "debye-huckel" or "pitzer".
  * @param [measured_pH] The pH read on the batch. The gap to the computed pH is taken as an unknown excess of strong acid or base, and the titrant is computed from the batch as measured.
  * @returns mol of titrant per litre of mixture; or litres of stock for the batch when titrant_conc and volume are given. Row-wise: names as one row and amounts with one row per mixture give one result per row (a spilled column).
  */
@@ -84,7 +84,7 @@ export function ADJUST(
  * @param names Substance names.
  * @param amounts Concentrations, mol/L (or unit text), same shape as names.
  * @param [temperature] Temperature, °C (0–100). Default 25.
- * @param [activity] Activity model: "davies" (default), "ideal" or "debye-huckel".
+ * @param [activity] Activity model: "davies" (default), "ideal", "debye-huckel" or "pitzer".
  * @returns β, mol/(L·pH). Row-wise: names as one row and amounts with one row per mixture give one result per row (a spilled column).
  */
 export function BETA(names: any[][], amounts: any[][], temperature?: any[][], activity?: any[][]): any[][] {
@@ -99,7 +99,7 @@ export function BETA(names: any[][], amounts: any[][], temperature?: any[][], ac
  * @param amounts Concentrations, mol/L (or unit text), same shape as names.
  * @param delta_pH Change in pH: positive for base, negative for acid.
  * @param [temperature] Temperature, °C (0–100). Default 25.
- * @param [activity] Activity model: "davies" (default), "ideal" or "debye-huckel".
+ * @param [activity] Activity model: "davies" (default), "ideal", "debye-huckel" or "pitzer".
  * @returns mol/L of strong base (delta > 0) or strong acid (delta < 0), as a positive number. Row-wise: names as one row and amounts with one row per mixture give one result per row (a spilled column).
  */
 export function CAPACITY(names: any[][], amounts: any[][], delta_pH: any[][], temperature?: any[][], activity?: any[][]): any[][] {
@@ -114,7 +114,7 @@ export function CAPACITY(names: any[][], amounts: any[][], delta_pH: any[][], te
  * @param amounts Concentrations, mol/L (or unit text), same shape as names.
  * @param [species] A species name (e.g. "HPO4^2-" or "H+"): returns its concentration, mol/L. Omit for the whole table.
  * @param [temperature] Temperature, °C (0–100). Default 25.
- * @param [activity] Activity model: "davies" (default), "ideal" or "debye-huckel".
+ * @param [activity] Activity model: "davies" (default), "ideal", "debye-huckel" or "pitzer".
  * @returns A species' concentration (mol/L), or a table with a header row: species, charge, mol/L, fraction. Row-wise: names as one row and amounts with one row per mixture give one result per row (a spilled column).
  */
 export function SPECIES(names: any[][], amounts: any[][], species?: any[][], temperature?: any[][], activity?: any[][]): any[][] {
@@ -128,7 +128,7 @@ export function SPECIES(names: any[][], amounts: any[][], species?: any[][], tem
  * @param names Substance names.
  * @param amounts Concentrations, mol/L (or unit text), same shape as names.
  * @param [temperature] Temperature, °C (0–100). Default 25.
- * @param [activity] Activity model: "davies" (default), "ideal" or "debye-huckel".
+ * @param [activity] Activity model: "davies" (default), "ideal", "debye-huckel" or "pitzer".
  * @returns One line of text starting with "OK" or "CHECK". Row-wise: names as one row and amounts with one row per mixture give one result per row (a spilled column).
  */
 export function CHECK(names: any[][], amounts: any[][], temperature?: any[][], activity?: any[][]): any[][] {
@@ -142,7 +142,7 @@ export function CHECK(names: any[][], amounts: any[][], temperature?: any[][], a
  * @param names Substance names.
  * @param amounts Concentrations, mol/L (or unit text), same shape as names.
  * @param [temperature] Temperature, °C (0–100). Default 25.
- * @param [activity] Activity model of the speciation: "davies" (default), "ideal" or "debye-huckel".
+ * @param [activity] Activity model of the speciation: "davies" (default), "ideal", "debye-huckel" or "pitzer".
  * @returns Ionic strength, mol/L (given beyond the 1 mol/L limit too). Row-wise: names as one row and amounts with one row per mixture give one result per row (a spilled column).
  */
 export function IONIC(names: any[][], amounts: any[][], temperature?: any[][], activity?: any[][]): any[][] {
@@ -156,7 +156,7 @@ export function IONIC(names: any[][], amounts: any[][], temperature?: any[][], a
  * @param names Substance names (non-electrolytes such as sucrose count too).
  * @param amounts Concentrations, mol/L (or unit text), same shape as names.
  * @param [temperature] Temperature, °C (0–100). Default 25.
- * @param [activity] Activity model of the speciation: "davies" (default), "ideal" or "debye-huckel".
+ * @param [activity] Activity model of the speciation: "davies" (default), "ideal", "debye-huckel" or "pitzer".
  * @returns Ideal osmolarity, osmol/L. Row-wise: names as one row and amounts with one row per mixture give one result per row (a spilled column).
  */
 export function OSMOLARITY(names: any[][], amounts: any[][], temperature?: any[][], activity?: any[][]): any[][] {
@@ -170,7 +170,7 @@ export function OSMOLARITY(names: any[][], amounts: any[][], temperature?: any[]
  * @param names Substance names (non-electrolytes such as sucrose count too).
  * @param amounts Concentrations, mol/L (or unit text), same shape as names.
  * @param [temperature] Temperature, °C (0–100). Default 25.
- * @param [activity] Activity model: "davies" (default), "ideal" or "debye-huckel".
+ * @param [activity] Activity model: "davies" (default), "ideal", "debye-huckel" or "pitzer".
  * @returns Osmolality, osmol/kg of water. Row-wise: names as one row and amounts with one row per mixture give one result per row (a spilled column).
  */
 export function OSMOLALITY(names: any[][], amounts: any[][], temperature?: any[][], activity?: any[][]): any[][] {
@@ -215,7 +215,7 @@ export function MOLARMASS(substance: string): number {
  * @param [temperature] Temperature, °C (0–100). Default 25.
  * @param [ionic_strength] Target ionic strength, mol/L, made up with the salt. Default: no salt added.
  * @param [salt] Salt for the ionic strength. Default "NaCl".
- * @param [activity] Activity model: "davies" (default), "ideal" or "debye-huckel".
+ * @param [activity] Activity model: "davies" (default), "ideal", "debye-huckel" or "pitzer".
  * @param [other_names] Other components of the batch held at fixed amounts (salts, sugars, surfactants, a second buffer), one per cell.
  * @param [other_amounts] Concentration of each other component in the batch, mol/L or unit text; same shape as other_names.
  * @returns A table with a header row: component, mol, grams (solids) or litres (liquid stocks; a concentrated reagent by mass fraction gives both, as supplied); the other components follow the buffer.
@@ -248,7 +248,7 @@ export function RECIPE(
  * @param max_titrant_volume Largest titrant volume to add, L or unit text.
  * @param [points] Number of points, 2–1000. Default 51.
  * @param [temperature] Temperature, °C (0–100). Default 25.
- * @param [activity] Activity model: "davies" (default), "ideal" or "debye-huckel".
+ * @param [activity] Activity model: "davies" (default), "ideal", "debye-huckel" or "pitzer".
  * @returns A table with a header row: titrant volume (L), pH (#N/A beyond the 1 mol/L ionic-strength limit), then the marked points (steepest points and stoichiometric equivalence volumes) with their volume and pH.
  */
 export function CURVE(
@@ -274,7 +274,7 @@ export function CURVE(
  * @param amount_tolerance Relative tolerance on every amount (0.02 for ±2 %), or a range of tolerances of the same shape as names.
  * @param [pKa_uncertainty] ± uncertainty applied to every pKa, pH units. Default 0.
  * @param [temperature] Temperature, °C (0–100), default 25; or two cells for a range (2 and 8 for storage at 2–8 °C), searched as part of the worst case.
- * @param [activity] Activity model: "davies" (default), "ideal" or "debye-huckel".
+ * @param [activity] Activity model: "davies" (default), "ideal", "debye-huckel" or "pitzer".
  * @returns A table with a header row: low pH, high pH, method (an exhaustive worst case over all corners, or a flagged bounded search beyond 12 varied quantities).
  */
 export function PHRANGE(names: any[][], amounts: any[][], amount_tolerance: any, pKa_uncertainty?: any, temperature?: any, activity?: string): any[][] {

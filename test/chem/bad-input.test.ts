@@ -57,7 +57,7 @@ describe("option validation", () => {
     { opts: { temperatureC: 120 }, code: "out-of-range", says: /120 °C is outside 0–100/ },
     { opts: { temperatureC: -5 }, code: "out-of-range", says: /outside/ },
     { opts: { temperatureC: NaN }, code: "bad-input", says: /Temperature/ },
-    { opts: { activity: "pitzer" as never }, code: "bad-input", says: /pitzer/ },
+    { opts: { activity: "bromley" as never }, code: "bad-input", says: /bromley/ },
   ])("$opts → $code", ({ opts, code, says }) => {
     for (const r of [solveEquilibrium(good, opts), solvePH(good, opts), osmolarity(good, opts), ionicStrength(good, opts)]) {
       expect(r).toMatchObject({ ok: false, code });

@@ -101,6 +101,8 @@ function comp(id: string, systems: [AcidBaseSystem, number][], ions: [StrongIon,
 export const HCl = comp("HCl", [], [[Cl, 1]]);
 export const NaOH = comp("NaOH", [], [[Na, 1]]);
 export const NaCl = comp("NaCl", [], [[Na, 1], [Cl, 1]]);
+export const KCl = comp("KCl", [], [[K, 1], [Cl, 1]]);
+export const citricAcid = comp("citric acid", [[citrate, 1]], []);
 export const aceticAcid = comp("acetic acid", [[acetate, 1]], []);
 export const sodiumAcetate = comp("sodium acetate", [[acetate, 1]], [[Na, 1]]);
 export const KH2citrate = comp("KH2 citrate", [[citrate, 1]], [[K, 1]]);
@@ -156,6 +158,9 @@ const BY_REFERENCE_NAME: Record<string, Component> = {
   HCl,
   "acetic acid": aceticAcid,
   "sodium acetate": sodiumAcetate,
+  "citric acid": citricAcid,
+  NaCl,
+  KCl,
 };
 
 /** A reference case's mixture ([library name, mol/L] pairs) with these fixtures. */

@@ -121,7 +121,7 @@ describe("AQ.OSMOLALITY", () => {
 
   test.each([
     ['=AQ.OSMOLALITY("NaCl",-0.1)', "#VALUE!", /negative/],
-    ['=AQ.OSMOLALITY("NaCl",0.1,25,"pitzer")', "#VALUE!", /"pitzer" is not known/],
+    ['=AQ.OSMOLALITY("NaCl",0.1,25,"bromley")', "#VALUE!", /"bromley" is not known/],
     ['=AQ.OSMOLALITY("NaCl",3)', "#N/A", /ionic strength/],
   ])("%s is %s", (formula, error, message) => expectError(formula, error, message));
 });

@@ -63,7 +63,7 @@ export interface ReferenceCase {
 export interface ReferenceTable {
   id: string;
   title: string;
-  quantity: "pH" | "beta" | "pKw" | "pKw-density" | "pK" | "molar-mass" | "debye-huckel-A" | "reagent-molarity";
+  quantity: "pH" | "beta" | "pKw" | "pKw-density" | "pK" | "molar-mass" | "debye-huckel-A" | "reagent-molarity" | "mean-activity-coefficient" | "osmotic-coefficient";
   unit: string;
   source: string;
   locator: string;

@@ -123,7 +123,7 @@ export const temperatureCell: fc.Arbitrary<unknown> = fc.oneof(
 
 export const activityCell: fc.Arbitrary<unknown> = fc.oneof(
   { weight: 6, arbitrary: fc.constantFrom(null, undefined, "", "davies", "ideal", "debye-huckel", "Debye-Hückel", "NONE") },
-  { weight: 1, arbitrary: fc.constantFrom("pitzer", "<b>davies</b>", "davies ", 0, 1, true, NaN, "__proto__", "constructor", "toString") },
+  { weight: 1, arbitrary: fc.constantFrom("bromley", "<b>davies</b>", "davies ", 0, 1, true, NaN, "__proto__", "constructor", "toString") },
   { weight: 1, arbitrary: fc.string({ maxLength: 20 }) },
 );
 

@@ -27,6 +27,7 @@ const MODEL_RANGE: Record<ActivityModel, number> = {
   davies: LIMITS.ionicStrengthCaution,
   ideal: LIMITS.ionicStrengthCaution,
   "debye-huckel": LIMITS.debyeHuckelCaution,
+  pitzer: LIMITS.pitzerCaution,
 };
 const BUFFERS = ["acetic acid", "NaH2PO4", "Tris", "citric acid", "glycine", "borax", "ammonia", "HEPES", "histidine", "sodium bicarbonate"].map(component);
 const HCl = component("HCl");

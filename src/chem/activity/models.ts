@@ -1,7 +1,7 @@
 /**
  * The activity models, defined once: the id the engine uses, the names a user may type for it
- * (case-insensitive), the label the pane shows, the ionic strength above which it loses accuracy,
- * and its shape f(I) in log10 γ(z) = −A z² f(I). Adding a model is one entry here (plus its file);
+ * (case-insensitive), the label the pane shows, the ionic strengths above which it loses accuracy
+ * and becomes unreliable, and its shape f(I) in log10 γ(z) = −A z² f(I). Adding a model is one entry here (plus its file);
  * the functions, the pane and the command line read the list, the names and the message from here.
  */
 import { DEFAULTS, LIMITS } from "../defaults";
@@ -19,6 +19,14 @@ export interface ActivityModelEntry {
   dependsOnIonicStrength: boolean;
   /** mol/L: above this ionic strength the model loses accuracy (a warning, not a refusal). */
   cautionAbove: number;
+  /** mol/L: above this the model is unreliable (a stronger warning). */
+  unreliableAbove: number;
+  /**
+   * True when each ion has its own γ from the composition (Pitzer): the solve then iterates the
+   * speciation with pitzer-iteration.ts, and shape/shapeDerivative (Davies) serve only callers that
+   * know no more than I (apparent pKa, the speciation chart, the first guess of the solve).
+   */
+  ionSpecific: boolean;
   /** f(I), I in mol/L. */
   shape(ionicStrength: number): number;
   /** df/dI. */
@@ -33,6 +41,8 @@ export const ACTIVITY_MODELS = {
     label: "Davies activity",
     dependsOnIonicStrength: true,
     cautionAbove: LIMITS.ionicStrengthCaution,
+    unreliableAbove: LIMITS.ionicStrengthStrong,
+    ionSpecific: false,
     shape: daviesShape,
     shapeDerivative: daviesShapeDerivative,
   },
@@ -41,6 +51,8 @@ export const ACTIVITY_MODELS = {
     label: "ideal (no activity correction)",
     dependsOnIonicStrength: false,
     cautionAbove: LIMITS.ionicStrengthCaution,
+    unreliableAbove: LIMITS.ionicStrengthStrong,
+    ionSpecific: false,
     shape: zero,
     shapeDerivative: zero,
   },
@@ -49,12 +61,27 @@ export const ACTIVITY_MODELS = {
     label: "extended Debye–Hückel activity",
     dependsOnIonicStrength: true,
     cautionAbove: LIMITS.debyeHuckelCaution,
+    unreliableAbove: LIMITS.ionicStrengthStrong,
+    ionSpecific: false,
     shape: debyeHuckelShape,
     shapeDerivative: debyeHuckelShapeDerivative,
+  },
+  pitzer: {
+    names: ["pitzer"],
+    label: "Pitzer activity (ion-specific)",
+    dependsOnIonicStrength: true,
+    cautionAbove: LIMITS.pitzerCaution,
+    unreliableAbove: LIMITS.pitzerUnreliable,
+    ionSpecific: true,
+    shape: daviesShape,
+    shapeDerivative: daviesShapeDerivative,
   },
 } as const satisfies Record<string, ActivityModelEntry>;
 
 export type ActivityModelId = keyof typeof ACTIVITY_MODELS;
+
+/** The model an ion-specific solve starts from (its first guess of the speciation), and the fallback for an ion without parameters. */
+export const ION_SPECIFIC_START: ActivityModelId = "davies";
 
 /** The model ids in the order the messages and the docs list them. */
 export const ACTIVITY_MODEL_IDS = Object.keys(ACTIVITY_MODELS) as ActivityModelId[];

@@ -142,7 +142,7 @@ describe("adjust: bad input", () => {
     { label: "stock above the engine's limit", run: () => adjust(acetateBuffer, f.NaOH, 5, { stock: { conc: 50, volume: 1 } }), code: "out-of-range", text: "mol/L" },
     { label: "negative amount in the mixture", run: () => adjust(f.mixture([f.aceticAcid, -1]), f.NaOH, 5), code: "bad-input", text: "negative" },
     { label: "temperature 150 °C", run: () => adjust(acetateBuffer, f.NaOH, 5, { temperatureC: 150 }), code: "out-of-range", text: "Temperature" },
-    { label: "unknown activity model", run: () => adjust(acetateBuffer, f.NaOH, 5, { activity: "pitzer" as never }), code: "bad-input", text: "activity" },
+    { label: "unknown activity model", run: () => adjust(acetateBuffer, f.NaOH, 5, { activity: "bromley" as never }), code: "bad-input", text: "activity" },
   ])("$label → $code", ({ run, code, text }) => {
     const r = run();
     expect(r.ok ? "ok" : r.code).toBe(code);
