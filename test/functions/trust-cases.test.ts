@@ -77,6 +77,27 @@ describe("item 4: AQ.RECIPE refuses a stock too dilute for the batch, with the l
   });
 });
 
+describe("item 5: a strong acid or base without a stock is listed as pure substance, and says so", () => {
+  test('=AQ.RECIPE("sodium tetraborate decahydrate","HCl",8.5,0.04,1): "hydrochloric acid, as 100 %", grams of HCl itself', () => {
+    const rows = table('=AQ.RECIPE("sodium tetraborate decahydrate","HCl",8.5,0.04,1)');
+    expect(rows.map((r) => r[0])).toEqual(["component", "sodium tetraborate decahydrate", "hydrochloric acid, as 100 %"]);
+    const [, mol, grams, litres] = rows[2] as [string, number, number, string];
+    expect(litres).toBe("");
+    expect(Math.abs(grams - mol * num('=AQ.MOLARMASS("HCl")'))).toBeLessThan(1e-12 * grams);
+    // the same batch with the acid named as supplied: the grams of 37 % acid are the pure grams / 0.37
+    const supplied = table('=AQ.RECIPE("sodium tetraborate decahydrate","HCl 37 %",8.5,0.04,1)');
+    expect(supplied[2][0]).toMatch(/^hydrochloric acid 37 % w\/w /);
+    expect(Math.abs((supplied[2][2] as number) * 0.37 - grams)).toBeLessThan(1e-9 * grams);
+  });
+
+  test("NaOH in grams is labelled too; a named stock, the buffer forms and a neutral salt are not", () => {
+    expect(table('=AQ.RECIPE("acetic acid","NaOH",5,0.1,1,25,0.2)').map((r) => r[0])).toEqual(["component", "acetic acid", "sodium hydroxide, as 100 %", "sodium chloride"]);
+    expect(table('=AQ.RECIPE("acetic acid","1 M NaOH",5,0.1,1)').map((r) => r[0])).toEqual(["component", "acetic acid", "sodium hydroxide"]);
+    // a strong acid among the other components is weighed the same way, and labelled the same way
+    expect(table('=AQ.RECIPE("acetic acid","sodium acetate",5,0.1,1,,,,,"HCl",0.001)').map((r) => r[0])).toEqual(["component", "acetic acid", "sodium acetate", "hydrochloric acid, as 100 %"]);
+  });
+});
+
 describe("item 6: a formula-derived molar mass has the cap of a typed one (1e6 g/mol)", () => {
   afterEach(() => resetActiveLibrary());
   const heavy = () => {

@@ -12,7 +12,7 @@
  * the recipe is solved and listed after the buffer (and salt) rows.
  */
 import type { Mixture } from "../../chem/types";
-import { recipe as recipeOf, type RecipeRequest } from "../../chem/workflows";
+import { recipe as recipeOf, strongCharge, type RecipeLine, type RecipeRequest } from "../../chem/workflows";
 import { isBlank, plainNumber, quantity, text, type Cell } from "../args";
 import { AqError, badInput, finite, orThrow } from "../errors";
 import { readEntries } from "../mixture";
@@ -69,13 +69,25 @@ export function recipe(
   const rows: unknown[][] = [RECIPE_HEADER];
   for (const line of r.lines) {
     rows.push([
-      labels.get(line.component.id) ?? line.name,
+      labels.get(line.component.id) ?? rowName(line),
       finite(line.mol, "mol"),
       line.grams === undefined ? "" : finite(line.grams, "grams"),
       line.litres === undefined ? "" : finite(line.litres, "litres"),
     ]);
   }
   return rows;
+}
+
+/**
+ * A strong acid or base weighed in grams (named without a stock: "HCl", "NaOH") is listed as pure
+ * substance — the grams are of HCl or NaOH itself, not of a reagent as supplied — and its row says
+ * so, so that nobody weighs 37 % acid for them.
+ */
+export const PURE_SUBSTANCE = "as 100 %";
+
+function rowName(line: RecipeLine): string {
+  const pure = line.grams !== undefined && line.litres === undefined && strongCharge(line.component) !== null;
+  return pure ? `${line.name}, ${PURE_SUBSTANCE}` : line.name;
 }
 
 /** other_names / other_amounts: both or neither; a range of blank cells is no background. */
