@@ -76,6 +76,8 @@ const GROUPS: [string, string][] = [
   ["6. pKa at other temperatures (I = 0)", "ches-pk"],
   ["6. pKa at other temperatures (I = 0)", "mopso-pk"],
   ["6. pKa at other temperatures (I = 0)", "caps-pk"],
+  ["6. pKa at other temperatures (I = 0)", "carbonate-pk1"],
+  ["6. pKa at other temperatures (I = 0)", "carbonate-pk2"],
   ["6. pKa at other temperatures (I = 0)", "goods-buffers-37"],
   ["6. pKa at other temperatures (I = 0)", "new-systems-pk"],
   ["7. Molar masses", "molar-masses"],

@@ -114,12 +114,16 @@ describe("AQ.CHECK: warnings and errors", () => {
     expect(text).toMatch(/davies activity model is unreliable/);
   });
 
-  test("a pKa without ΔrH° used at 37 °C is reported (benzoic acid has none in the library)", () => {
-    const text = check('=AQ.CHECK({"benzoic acid";"sodium benzoate"},{0.01;0.01},37)');
+  test("a pKa without ΔrH° used at 37 °C is reported (sorbic acid has none in the library)", () => {
+    const text = check('=AQ.CHECK({"sorbic acid";"potassium sorbate"},{0.01;0.01},37)');
     expect(text).toMatch(/^CHECK: buffer/);
-    expect(text).toMatch(/ΔrH° is unknown for benzoate/);
+    expect(text).toMatch(/ΔrH° is unknown for sorbate/);
     // and at 25 °C the same mixture needs no warning
-    expect(check('=AQ.CHECK({"benzoic acid";"sodium benzoate"},{0.01;0.01})')).toMatch(/^OK: buffer/);
+    expect(check('=AQ.CHECK({"sorbic acid";"potassium sorbate"},{0.01;0.01})')).toMatch(/^OK: buffer/);
+  });
+
+  test("benzoate now carries a published ΔrH° and ΔrCp°: no temperature warning at 37 °C", () => {
+    expect(check('=AQ.CHECK({"benzoic acid";"sodium benzoate"},{0.01;0.01},37)')).not.toMatch(/ΔrH° is unknown for benzoate/);
   });
 
   test("a step without ΔrH° far from the pH is not reported (histidine pK1 ≈ 1.5 at pH 6 and 5 °C)", () => {

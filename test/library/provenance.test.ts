@@ -13,7 +13,7 @@ test("a published value names authors, title, journal, year, DOI and the place i
 });
 
 test("an unverified value that names the source it was recalled from says both", () => {
-  expect(describeProvenance(step("acetate", 0).pKa, lookup)).toBe(
+  expect(describeProvenance(step("acetate", 0).dH!, lookup)).toBe(
     "from memory, unverified: as recalled from Goldberg et al. (2002), whose entry could not be read here [R. N. Goldberg, N. Kishore, R. M. Lennen, Thermodynamic quantities for the ionization reactions of buffers. Journal of Physical and Chemical Reference Data, 31, 231 (2002) — entry: acetic acid]",
   );
 });

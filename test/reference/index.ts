@@ -23,7 +23,7 @@ export interface KnownDeviation {
 /** An equation the source gives, in one of the forms evaluate() knows; T in kelvin. */
 export interface Equation {
   text: string;
-  form: "a/T + b + c·T + d·T²" | "−(a + b/T + c·ln T)/ln 10";
+  form: "a/T + b + c·T + d·T²" | "−(a + b/T + c·ln T)/ln 10" | "−(a + b·T + c/T + d·log T + e/T²)";
   coefficients: Record<string, number>;
   /** How closely the equation as typed must give the printed check values, and why. */
   printedTolerance: Tolerance;
@@ -91,6 +91,8 @@ export function evaluate(eq: Equation, temperatureC: number): number {
       return k.a / T + k.b + k.c * T + k.d * T * T;
     case "−(a + b/T + c·ln T)/ln 10":
       return -(k.a + k.b / T + k.c * Math.log(T)) / Math.LN10;
+    case "−(a + b·T + c/T + d·log T + e/T²)":
+      return -(k.a + k.b * T + k.c / T + k.d * Math.log10(T) + k.e / (T * T));
     default:
       throw new Error(`unknown equation form ${String(eq.form)}`);
   }
