@@ -234,6 +234,26 @@ describe("Picture view in Chromium at the pane's width", () => {
     await page.screenshot({ path: path.join(ARTIFACTS, "pane-picture.png"), fullPage: true });
   });
 
+  test("2 M NaOH: Try it and the Picture show the function's refusal beyond the ionic-strength limit, no pH", async () => {
+    // the message is =AQ.PH("NaOH",2)'s (test/taskpane/ionic-limit.test.ts compares them); the issue saw pH 14.30 here
+    const refusal = /The ionic strength would be 2 mol\/L, beyond the 1 mol\/L limit of the activity models: no pH or pH-derived value is given\./;
+    await fillTry(page, [["NaOH", "2"], ["", ""]]);
+    await page.click("#try-run");
+    await waitForText(page.locator("#try-result"), (t) => /No result:/.test(t) && refusal.test(t));
+    expect(await page.locator("#try-ph").count()).toBe(0);
+    expect(await page.locator("#try-result").innerText()).not.toMatch(/\b1[45]\.\d/);
+    await page.getByRole("tab", { name: "Picture" }).click();
+    await waitForText(page.locator("#picture-facts"), (t) => /No picture:/.test(t) && refusal.test(t));
+    expect(await page.locator("#picture-ph").count()).toBe(0);
+    expect(await page.locator("#panel-picture svg").count()).toBe(0);
+    expect(await page.locator("#panel-picture").innerText()).not.toMatch(/\b1[45]\.\d/);
+    await page.screenshot({ path: path.join(ARTIFACTS, "pane-ionic-limit.png"), fullPage: true });
+    // 1 M NaOH, at the limit, is answered again
+    await fillTry(page, [["NaOH", "1"], ["", ""]]);
+    await page.click("#try-run");
+    await waitForText(page.locator("#try-ph"), /^13\.\d\d$/);
+  });
+
   test("the Picture tab is reached from the keyboard and leaves its panel when another tab opens", async () => {
     await page.getByRole("tab", { name: "Try it" }).focus();
     await page.keyboard.press("ArrowRight");
