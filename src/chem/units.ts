@@ -151,3 +151,35 @@ export function parseQuantity(
   if (dimension === "temperature" && r.value < -273.15) return fail("bad-input", `"${text}" is below absolute zero.`);
   return nonNegative(r.value, dimension, text);
 }
+
+/** The unit a volume was written in, for giving volumes back in it. */
+export interface WrittenVolumeUnit {
+  /** The unit's symbol for labels: "L", "mL", "µL", or the text written for other volume units ("dm3"). */
+  symbol: string;
+  /** Litres per one of this unit (mL: 0.001). */
+  litres: number;
+}
+
+const LITRE: WrittenVolumeUnit = { symbol: "L", litres: 1 };
+
+/**
+ * The rule for volumes given back (AQ.ADJUST's litres of stock, AQ.RECIPE's stock column, AQ.CURVE's
+ * volumes): they are in the unit the batch volume was written in — "800 mL" gives mL, "1.5 L" gives
+ * L; a plain number (litres) or text that is not a volume gives L. Only the unit is read here; the
+ * value itself is parsed (and refused if bad) by parseQuantity.
+ */
+export function writtenVolumeUnit(value: unknown): WrittenVolumeUnit {
+  if (typeof value !== "string") return LITRE;
+  const lead = leadingDecimal(value.trim());
+  if (!lead) return LITRE;
+  const unit = lead.rest.trim();
+  const read = readUnit(unit);
+  const REF = unitSystem().ref;
+  if (!read.ok || read.temperature || !read.unit.equalBase(REF.volume)) return LITRE;
+  const litres = convertTo(1, read.unit, REF.volume);
+  if (!(Number.isFinite(litres) && litres > 0)) return LITRE;
+  const f = (read.unit.units as unknown as { unit: { name: string }; prefix: { name: string }; power: number }[])[0];
+  const isLitre = read.unit.units.length === 1 && f.power === 1 && ["L", "l", "litre", "liter", "litres", "liters"].includes(f.unit.name);
+  const symbol = isLitre ? `${f.prefix.name === "u" ? "µ" : f.prefix.name}L` : unit;
+  return { symbol, litres };
+}

@@ -56,12 +56,12 @@ export function PH(names: any[][], amounts: any[][], temperature?: any[][], acti
  * @param amounts Concentrations, mol/L (or unit text), same shape as names.
  * @param target_pH The pH to reach.
  * @param titrant Name of the titrant (NaOH, HCl, or any library substance), optionally with its stock ("1 M HCl") or as a concentrated reagent by mass fraction ("HCl 37 % w/w", "NaOH 50 %"; density tables at 20 °C).
- * @param [titrant_conc] Stock concentration of the titrant, mol/L. With volume, the result is litres of stock.
- * @param [volume] Batch volume, L (or unit text such as "800 L"). Needs titrant_conc.
+ * @param [titrant_conc] Stock concentration of the titrant, mol/L. With volume, the result is the volume of stock.
+ * @param [volume] Batch volume, L (or unit text such as "800 L"). Needs titrant_conc. The volume of stock comes back in this unit ("800 mL" gives mL).
  * @param [temperature] Temperature, °C (0–100). Default 25.
  * @param [activity] Activity model: "davies" (default), "ideal", "debye-huckel" or "pitzer".
  * @param [measured_pH] The pH read on the batch. The gap to the computed pH is taken as an unknown excess of strong acid or base, and the titrant is computed from the batch as measured.
- * @returns mol of titrant per litre of mixture; or litres of stock for the batch when titrant_conc and volume are given. Row-wise: names as one row and amounts with one row per mixture give one result per row (a spilled column).
+ * @returns mol of titrant per litre of mixture; or the volume of stock for the batch when titrant_conc and volume are given, in the unit volume is written in (L for a number). Row-wise: names as one row and amounts with one row per mixture give one result per row (a spilled column).
  */
 export function ADJUST(
   names: any[][],
@@ -211,7 +211,7 @@ export function MOLARMASS(substance: string): number {
  * @param base_form The basic form (e.g. "Na2HPO4·7H2O", "L-histidine", "Tris", "ammonia 25 %"), or a strong base titrant ("NaOH", "NaOH 1 M", "NaOH 50 % w/w") with an acidic form.
  * @param target_pH The pH to reach.
  * @param total_conc Total buffer concentration (the acid–base system), mol/L or unit text.
- * @param volume Batch volume, L or unit text.
+ * @param volume Batch volume, L or unit text. Stock volumes come back in this unit ("800 mL" gives mL).
  * @param [temperature] Temperature, °C (0–100). Default 25.
  * @param [ionic_strength] Target ionic strength, mol/L, made up with the salt. Default: no salt added.
  * @param [salt] Salt for the ionic strength. Default "NaCl".
@@ -244,12 +244,12 @@ export function RECIPE(
  * @param amounts Concentrations, mol/L (or unit text), same shape as names.
  * @param titrant Name of the titrant (e.g. "NaOH"), or with its stock ("0.1 M NaOH", "HCl 37 % w/w": volumes are then of the reagent as supplied).
  * @param titrant_conc Stock concentration of the titrant, mol/L or unit text; empty ("") when the titrant names its stock.
- * @param volume Starting volume of the mixture, L or unit text.
+ * @param volume Starting volume of the mixture, L or unit text. The table's volumes come back in this unit ("50 mL" gives mL).
  * @param max_titrant_volume Largest titrant volume to add, L or unit text.
  * @param [points] Number of points, 2–1000. Default 51.
  * @param [temperature] Temperature, °C (0–100). Default 25.
  * @param [activity] Activity model: "davies" (default), "ideal", "debye-huckel" or "pitzer".
- * @returns A table with a header row: titrant volume (L), pH (#N/A beyond the 1 mol/L ionic-strength limit), then the marked points (steepest points and stoichiometric equivalence volumes) with their volume and pH.
+ * @returns A table with a header row: titrant volume (in the unit of volume), pH (#N/A beyond the 1 mol/L ionic-strength limit), then the marked points (steepest points and stoichiometric equivalence volumes) with their volume and pH.
  */
 export function CURVE(
   names: any[][],

@@ -149,7 +149,8 @@ describe("AQ.RECIPE", () => {
 
 describe("AQ.CURVE", () => {
   test("acetic acid with NaOH: header, n rows, the steepest point and the stoichiometric equivalence at 25 mL", () => {
-    const rows = table('=AQ.CURVE("acetic acid",0.1,"NaOH",0.1,"25 mL","50 mL",11)');
+    // volumes come back in the unit the starting volume is written in: here L (a number)
+    const rows = table('=AQ.CURVE("acetic acid",0.1,"NaOH",0.1,0.025,"50 mL",11)');
     expect(rows[0]).toEqual(["titrant volume (L)", "pH", "marked point", "marked volume (L)", "marked pH"]);
     expect(rows).toHaveLength(12);
     expectNear(rows[1][1] as number, num('=AQ.PH("acetic acid",0.1)'), 1e-12, "first row = the mixture itself");

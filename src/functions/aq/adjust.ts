@@ -1,11 +1,13 @@
 /**
  * AQ.ADJUST: titrant to reach a target pH — mol per litre of mixture, or, with a stock concentration
- * and a batch volume, litres of stock for the batch (dilution included). An unreachable target is
+ * and a batch volume, the volume of stock for the batch (dilution included), in the unit the batch
+ * volume was written in ("800 mL" → mL, a number → L). An unreachable target is
  * #N/A with a message saying which way the titrant moves the pH and how far it can go. With
  * measured_pH, the titrant is computed from the batch as measured: the gap between the computed and
  * the measured pH is taken as an unknown excess of strong acid or base (chem/workflows/adjust.ts).
  */
 import { adjust as adjustMixture } from "../../chem/workflows";
+import { writtenVolumeUnit } from "../../chem";
 import { isBlank, plainNumber, quantity, text, type Cell } from "../args";
 import { badInput, finite, orThrow } from "../errors";
 import { readMixtureArgs } from "../mixture";
@@ -42,5 +44,7 @@ export function adjust(
   const conc = named.stockConc ?? quantity(titrantConc, "titrant_conc", "concentration", { molarMass: component.molarMass });
   const litres = quantity(volume, "volume", "volume");
   const stock = { conc, volume: litres };
-  return finite(orThrow(adjustMixture(mixture, component, target, { ...options, stock })).value, "litres of stock");
+  // in the unit the batch volume was written in ("800 mL" → mL; a number → L): chem/units.ts
+  const unit = writtenVolumeUnit(volume);
+  return finite(orThrow(adjustMixture(mixture, component, target, { ...options, stock })).value / unit.litres, `${unit.symbol} of stock`);
 }

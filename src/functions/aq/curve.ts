@@ -1,6 +1,7 @@
 /**
  * AQ.CURVE: titration curve as a spilled table with a header row —
  *   titrant volume (L) | pH | marked point | marked volume (L) | marked pH
+ * with the volumes in the unit the starting volume was written in ("50 mL" → "titrant volume (mL)").
  * The first two columns are the curve, a clean numeric block: select them (header included) and
  * insert an X-Y scatter chart. A point whose solution is beyond the ionic-strength limit is #N/A in
  * its own pH cell, with the engine's message; the others are still given.
@@ -11,6 +12,7 @@
  * system, which is why both are given and neither is called the other.
  */
 import { curve as curveOf } from "../../chem/workflows";
+import { writtenVolumeUnit } from "../../chem";
 import { isBlank, plainNumber, quantity, text, type Cell } from "../args";
 import { badInput, finite, orThrow, refusedCell } from "../errors";
 import { readMixtureArgs } from "../mixture";
@@ -18,6 +20,9 @@ import { resolveWithStock } from "./stock-name";
 import { chemOptions } from "./options";
 
 export const CURVE_HEADER = ["titrant volume (L)", "pH", "marked point", "marked volume (L)", "marked pH"];
+
+/** The header with the volumes in the unit the starting volume was written in ("50 mL" → mL). */
+const headerIn = (symbol: string): string[] => CURVE_HEADER.map((h) => h.replace("(L)", `(${symbol})`));
 
 export function curve(
   names: Cell,
@@ -49,16 +54,18 @@ export function curve(
     marks.push({ label: `stoichiometric equivalence ${i + 1}`, volume: e.volume, pH: e.pH === null ? refusedCell(e.refused) : finite(e.pH, "pH") }),
   );
   marks.sort((a, b) => a.volume - b.volume);
-  const rows: unknown[][] = [CURVE_HEADER];
+  // volumes in the unit the starting volume was written in ("50 mL" → mL; a number → L): chem/units.ts
+  const unit = writtenVolumeUnit(volume);
+  const rows: unknown[][] = [headerIn(unit.symbol)];
   const height = Math.max(r.points.length, marks.length);
   for (let i = 0; i < height; i++) {
     const p = r.points[i];
     const m = marks[i];
     rows.push([
-      p === undefined ? "" : finite(p.volume, "volume"),
+      p === undefined ? "" : finite(p.volume / unit.litres, "volume"),
       p === undefined ? "" : p.pH === null ? refusedCell(p.refused) : finite(p.pH, "pH"),
       m === undefined ? "" : m.label,
-      m === undefined ? "" : finite(m.volume, "volume"),
+      m === undefined ? "" : finite(m.volume / unit.litres, "volume"),
       m === undefined ? "" : m.pH,
     ]);
   }

@@ -1,6 +1,6 @@
 /**
  * AQ.RECIPE: what to weigh for a buffer batch, as a table with a header row:
- *   component | mol | grams | litres of stock
+ *   component | mol | grams | litres of stock   ("mL of stock" when the batch volume is written in mL)
  * grams = molar mass × mol (hydrate water included) for a solid; for a component named with a
  * stock concentration ("HCl 1 M", "1 M NaOH") the litres of that stock instead; for a concentrated
  * reagent by mass fraction ("HCl 37 % w/w", "glacial acetic acid") the litres and the grams of the
@@ -12,6 +12,7 @@
  * the recipe is solved and listed after the buffer (and salt) rows.
  */
 import type { Mixture } from "../../chem/types";
+import { writtenVolumeUnit } from "../../chem";
 import { recipe as recipeOf, strongCharge, type RecipeLine, type RecipeRequest } from "../../chem/workflows";
 import { isBlank, plainNumber, quantity, text, type Cell } from "../args";
 import { AqError, badInput, finite, orThrow } from "../errors";
@@ -66,13 +67,15 @@ export function recipe(
     throw badInput("salt is used only with ionic_strength: give the target ionic strength too");
   }
   const r = orThrow(recipeOf(req, chemOptions(temperature, activity)));
-  const rows: unknown[][] = [RECIPE_HEADER];
+  // stock volumes in the unit the batch volume was written in ("800 mL" → "mL of stock"): chem/units.ts
+  const unit = writtenVolumeUnit(volume);
+  const rows: unknown[][] = [unit.litres === 1 && unit.symbol === "L" ? RECIPE_HEADER : [...RECIPE_HEADER.slice(0, 3), `${unit.symbol} of stock`]];
   for (const line of r.lines) {
     rows.push([
       labels.get(line.component.id) ?? rowName(line),
       finite(line.mol, "mol"),
       line.grams === undefined ? "" : finite(line.grams, "grams"),
-      line.litres === undefined ? "" : finite(line.litres, "litres"),
+      line.litres === undefined ? "" : finite(line.litres / unit.litres, `${unit.symbol} of stock`),
     ]);
   }
   return rows;
