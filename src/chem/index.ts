@@ -7,6 +7,8 @@ export type {
   PkaStep,
   AcidBaseSystem,
   ComplexSpecies,
+  SolidSpecies,
+  Saturation,
   StrongIon,
   Component,
   MixtureEntry,

@@ -42,6 +42,27 @@ export interface AcidBaseSystem {
    * protons, or with itself (polyborates). Used when the metal (a strong ion) is in the mixture.
    */
   complexes?: ComplexSpecies[];
+  /** Sparingly soluble solids of the ligand, for saturation indices only (never precipitated). */
+  solids?: SolidSpecies[];
+}
+
+/** A solid M_m L_l H_p (s) ⇌ m·M + l·L + p·H⁺ with its solubility product at 25 °C and I = 0. */
+export interface SolidSpecies {
+  name: string;
+  /** Strong-ion id of the metal. */
+  metal: string;
+  metals: number;
+  ligands: number;
+  protons: number;
+  /** log10 Ksp at 25 °C and I = 0 (activities). */
+  logKsp: number;
+}
+
+/** A solid's saturation index SI = log10(IAP/Ksp): above 0 the solution is supersaturated in it. */
+export interface Saturation {
+  name: string;
+  systemId: string;
+  saturationIndex: number;
 }
 
 /**
@@ -157,6 +178,8 @@ export interface Equilibrium {
   regime: Regime;
   /** Plain-language warnings (ionic strength beyond the activity model's range, missing ΔrH° …). */
   warnings: string[];
+  /** Saturation indices of the solids the systems list whose metal is present (25 °C Ksp). */
+  saturation?: Saturation[];
 }
 
 /** "beyond-limit": the solution's ionic strength is beyond LIMITS.maxIonicStrength (no pH-derived number). */

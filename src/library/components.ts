@@ -2,7 +2,7 @@
  * Library records → the engine's objects (src/chem/types.ts): systems with their 25 °C pKa, ΔrH°
  * and ΔrCp°, strong ions, and Components carrying the molar mass computed from the formula.
  */
-import type { AcidBaseSystem, Component, PkaStep, StrongIon } from "../chem/types";
+import type { AcidBaseSystem, ComplexSpecies, Component, PkaStep, SolidSpecies, StrongIon } from "../chem/types";
 import { molarMassOf } from "./formula";
 import type { IonRecord, SubstanceRecord, SystemRecord } from "./types";
 
@@ -15,6 +15,21 @@ export function toSystem(r: SystemRecord): AcidBaseSystem {
   });
   const sys: AcidBaseSystem = { id: r.id, name: r.name, topCharge: r.topCharge, steps: Object.freeze(steps) as PkaStep[] };
   if (r.speciesNames) sys.speciesNames = Object.freeze([...r.speciesNames]) as string[];
+  if (r.complexes && r.complexes.length > 0) {
+    sys.complexes = Object.freeze(
+      r.complexes.map((c) => {
+        const spec: ComplexSpecies = { name: c.name, ligands: c.ligands, protons: c.protons, logBeta: c.logBeta.value };
+        if (c.metal !== undefined) spec.metal = c.metal;
+        if (c.dH) spec.dH = c.dH.value;
+        return Object.freeze(spec);
+      }),
+    ) as ComplexSpecies[];
+  }
+  if (r.solids && r.solids.length > 0) {
+    sys.solids = Object.freeze(
+      r.solids.map((x) => Object.freeze({ name: x.name, metal: x.metal, metals: x.metals, ligands: x.ligands, protons: x.protons, logKsp: x.logKsp.value })),
+    ) as SolidSpecies[];
+  }
   return Object.freeze(sys);
 }
 

@@ -51,12 +51,42 @@ export interface StepRecord {
   dCp?: ValueRecord;
 }
 
+/** A species M + l·L + p·H⁺ of a system's fully deprotonated form L (no metal: the ligand alone). */
+export interface ComplexRecord {
+  name: string;
+  /** Strong-ion id. */
+  metal?: string;
+  ligands: number;
+  protons: number;
+  /** log β at 25 °C and I = 0, unit "1". */
+  logBeta: ValueRecord;
+  /** ΔrH° of the formation reaction, kJ/mol. */
+  dH?: ValueRecord;
+  note?: string;
+}
+
+/** A solid M_m L_l H_p (s) ⇌ m M + l L + p H⁺, for saturation warnings only. */
+export interface SolidRecord {
+  name: string;
+  metal: string;
+  metals: number;
+  ligands: number;
+  protons: number;
+  /** log Ksp at 25 °C and I = 0, unit "1". */
+  logKsp: ValueRecord;
+  note?: string;
+}
+
 export interface SystemRecord {
   id: string;
   name: string;
   topCharge: number;
   speciesNames?: string[];
   steps: StepRecord[];
+  /** Species of this system's fully deprotonated form with metal ions, protons or itself. */
+  complexes?: ComplexRecord[];
+  /** Sparingly soluble solids of this system's ligand, checked for saturation (AQ.CHECK). */
+  solids?: SolidRecord[];
   note?: string;
 }
 

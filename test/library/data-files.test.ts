@@ -41,6 +41,11 @@ function valueRecords(): { path: string; rec: ValueRecord }[] {
         if (rec) out.push({ path: `systems[${s.id}].steps[${i}].${k}`, rec });
       }
     });
+    (s.complexes ?? []).forEach((c) => {
+      out.push({ path: `systems[${s.id}].complexes[${c.name}].logBeta`, rec: c.logBeta });
+      if (c.dH) out.push({ path: `systems[${s.id}].complexes[${c.name}].dH`, rec: c.dH });
+    });
+    (s.solids ?? []).forEach((x) => out.push({ path: `systems[${s.id}].solids[${x.name}].logKsp`, rec: x.logKsp }));
   }
   for (const s of BUILTIN_LIBRARY.substances ?? []) if (s.molarMass) out.push({ path: `substances[${s.id}].molarMass`, rec: s.molarMass });
   out.push({ path: "water.pKw25", rec: water.pKw25 as ValueRecord });
@@ -81,6 +86,11 @@ describe("provenance of every built-in number", () => {
         if (step.dH) expect(step.dH.unit).toBe("kJ/mol");
         if (step.dCp) expect(step.dCp.unit).toBe("J/(K·mol)");
       }
+      for (const c of s.complexes ?? []) {
+        expect(c.logBeta.unit).toBe("1");
+        if (c.dH) expect(c.dH.unit).toBe("kJ/mol");
+      }
+      for (const x of s.solids ?? []) expect(x.logKsp.unit).toBe("1");
     }
   });
 

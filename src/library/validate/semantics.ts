@@ -59,6 +59,21 @@ export function checkSystem(s: SystemRecord, path: string, world: World, out: Se
     checkValue(step.dH, childPath(p, "dH"), world, out);
     checkValue(step.dCp, childPath(p, "dCp"), world, out);
   });
+  const names = new Set<string>(s.speciesNames ?? []);
+  (s.complexes ?? []).forEach((c, i) => {
+    const p = childPath(childPath(path, "complexes"), i);
+    if (c.metal !== undefined && !world.ions.has(c.metal)) out.push({ path: childPath(p, "metal"), message: `unknown strong ion '${c.metal}'`, reference: true });
+    if (c.metal === undefined && c.ligands < 2) out.push({ path: childPath(p, "ligands"), message: "a species of the ligand alone needs at least 2 ligands (a protonated form is a pKa step)" });
+    if (names.has(c.name)) out.push({ path: childPath(p, "name"), message: `'${c.name}' is already the name of another species of ${s.id}` });
+    names.add(c.name);
+    checkValue(c.logBeta, childPath(p, "logBeta"), world, out);
+    checkValue(c.dH, childPath(p, "dH"), world, out);
+  });
+  (s.solids ?? []).forEach((x, i) => {
+    const p = childPath(childPath(path, "solids"), i);
+    if (!world.ions.has(x.metal)) out.push({ path: childPath(p, "metal"), message: `unknown strong ion '${x.metal}'`, reference: true });
+    checkValue(x.logKsp, childPath(p, "logKsp"), world, out);
+  });
 }
 
 /** Net charge of one formula unit as the record describes it (0 for a consistent record), or null if a reference is missing. */
