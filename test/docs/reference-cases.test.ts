@@ -29,7 +29,7 @@ describe("reference tables", () => {
       const where = { id: t.id };
       expect({ ...where, ok: [t.title, t.source, t.locator, t.verified, t.conditions, t.unit].every((x) => typeof x === "string" && x.length > 1) }).toEqual({ ...where, ok: true });
       expect({ ...where, status: ["V", "X"].includes(t.status) }).toEqual({ ...where, status: true });
-      expect({ ...where, quantity: ["pH", "beta", "pKw", "pKw-density", "pK", "molar-mass", "debye-huckel-A", "reagent-molarity", "mean-activity-coefficient", "osmotic-coefficient"].includes(t.quantity) }).toEqual({ ...where, quantity: true });
+      expect({ ...where, quantity: ["pH", "beta", "pKw", "pKw-density", "pK", "molar-mass", "debye-huckel-A", "reagent-molarity", "mean-activity-coefficient", "osmotic-coefficient", "log-conditional-K"].includes(t.quantity) }).toEqual({ ...where, quantity: true });
       expect({ ...where, tolerance: t.tolerance.value > 0 && t.tolerance.reason.length > 20 }).toEqual({ ...where, tolerance: true });
       expect({ ...where, cases: t.cases.length > 0 }).toEqual({ ...where, cases: true });
     }
@@ -61,6 +61,8 @@ describe("reference tables", () => {
                 ? c.temperatureC !== undefined && (c.densityGPerCm3 ?? 0) > 0
                 : t.quantity === "reagent-molarity"
                 ? c.substance !== undefined && c.source !== undefined
+                : t.quantity === "log-conditional-K"
+                ? (c.mixture?.length ?? 0) > 0 && c.complex !== undefined && c.ligand !== undefined && c.metalIon !== undefined
                 : c.substance !== undefined && (c.factor ?? 0) > 0;
         expect({ id: c.id, needs }).toEqual({ id: c.id, needs: true });
         if (!t.equation && c.printed !== undefined) expect({ id: c.id, printed: Number(c.printed) }).toEqual({ id: c.id, printed: c.expected });

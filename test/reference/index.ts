@@ -58,12 +58,16 @@ export interface ReferenceCase {
   densityGPerCm3?: number;
   /** Ph. Eur. only: which buffer of the table. */
   key?: string;
+  /** log-conditional-K cases: the species names of the complex, its free ligand form and its free metal ion. */
+  complex?: string;
+  ligand?: string;
+  metalIon?: string;
 }
 
 export interface ReferenceTable {
   id: string;
   title: string;
-  quantity: "pH" | "beta" | "pKw" | "pKw-density" | "pK" | "molar-mass" | "debye-huckel-A" | "reagent-molarity" | "mean-activity-coefficient" | "osmotic-coefficient";
+  quantity: "pH" | "beta" | "pKw" | "pKw-density" | "pK" | "molar-mass" | "debye-huckel-A" | "reagent-molarity" | "mean-activity-coefficient" | "osmotic-coefficient" | "log-conditional-K";
   unit: string;
   source: string;
   locator: string;
