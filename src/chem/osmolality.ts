@@ -11,7 +11,10 @@
  * non-electrolytes), I_m = I/w is the molal ionic strength, and
  *   Δ_el(I) = −2·ln10·A(T)·[ I·f(I) − ∫₀^I f(t) dt ]
  * is the electrostatic osmotic term of the activity model log10 γ(z) = −A z² f(I) (Davies, extended
- * Debye–Hückel; 0 for ideal). k_n is the slope of the osmotic coefficient of a non-electrolyte,
+ * Debye–Hückel; 0 for ideal). Under "pitzer" the ions' term is Pitzer's instead,
+ *   Δ_el = Σ_i m_i (φ − 1) = 2[−Aφ I^{3/2}/(1 + 1.2√I) + Σ_c Σ_a m_c m_a (Bφ + Z C) + mixing terms]
+ * (activity/pitzer.ts) at the molalities m_i = c_i/w of every ion at equilibrium; an ion without
+ * parameters enters through I and Z only (its own pair terms are zero). k_n is the slope of the osmotic coefficient of a non-electrolyte,
  * φ_n = 1 + k_n·m_n (data/osmotic.json).
  *
  * Method: Δ_el follows from the Gibbs–Duhem relation for an excess Gibbs energy that depends on I
@@ -31,7 +34,7 @@
 import data from "./data/osmotic.json";
 import { activityShape } from "./activity/model";
 import { debyeHuckelA } from "./activity/debye-huckel-a";
-import { solveEquilibrium } from "./solve-mixture";
+import { prepare } from "./prepared";
 import { fail, fmt } from "./failure";
 import type { ChemOptions, Component, Mixture, Result } from "./types";
 import { resolveOptions } from "./validate-options";
@@ -53,6 +56,8 @@ export interface OsmolalityValue {
   waterPerLitre: number;
   /** Molal ionic strength, mol/kg. */
   ionicStrength: number;
+  /** The model the ions' term comes from ("pitzer": Pitzer's osmotic coefficient; otherwise Δ_el of that model). */
+  model: string;
   /** Ideal part Σ m_i, the electrostatic term Δ_el and the non-electrolyte excess Σ k·m², osmol/kg. */
   ideal: number;
   electrostatic: number;
@@ -97,7 +102,9 @@ export function electrostaticOsmoticTerm(model: ChemOptions["activity"] & string
 export function osmolality(mix: Mixture, opts: ChemOptions = {}): Result<OsmolalityValue> {
   const o = resolveOptions(opts);
   if (!o.ok) return o;
-  const eq = solveEquilibrium(mix, { temperatureC: o.temperatureC, activity: o.activity });
+  const prepared = prepare(mix);
+  if (!prepared.ok) return prepared;
+  const eq = prepared.solve({ temperatureC: o.temperatureC, activity: o.activity });
   if (!eq.ok) return eq;
   let volume = 0;
   const estimatedVolume: string[] = [];
@@ -121,10 +128,12 @@ export function osmolality(mix: Mixture, opts: ChemOptions = {}): Result<Osmolal
   }
   const Im = eq.ionicStrength / w;
   const ideal = particles / w;
-  const electrostatic = electrostaticOsmoticTerm(o.activity, Im, o.temperatureC);
+  const pitzer = prepared.pitzerOsmoticExcess(w);
+  const electrostatic = pitzer ?? electrostaticOsmoticTerm(o.activity, Im, o.temperatureC);
   return {
     ok: true,
     value: ideal + electrostatic + nonElectrolyte,
+    model: pitzer === null ? o.activity : "pitzer",
     waterPerLitre: w,
     ionicStrength: Im,
     ideal,

@@ -134,6 +134,18 @@ export class PitzerState {
     }
   }
 
+  /**
+   * Σ m_i(φ − 1) of the ions at the last solve's speciation with every molality multiplied by
+   * scale (1/w turns the engine's mol/L into mol/kg of water), at Debye–Hückel A (log10).
+   */
+  osmoticExcessScaled(scale: number, A: number): number {
+    return this.model.evaluate(
+      this.m.map((v) => v * scale),
+      osmoticSlope(A),
+      this.m.map(() => 0),
+    );
+  }
+
   /** One pass: speciation → γ → conditional constants → charge balance. False if the balance fails. */
   pass(core: ChargeBalanceSolver): boolean {
     this.fillMolalities(core);

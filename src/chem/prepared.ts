@@ -97,9 +97,13 @@ export class PreparedMixture {
     return eq;
   }
 
-  /** Osmotic excess Σ m_i(φ − 1) of the ions (mol/kg) at the last "pitzer" solve, or null under another model. */
-  pitzerOsmoticExcess(): number | null {
-    return this.pitzerApplied && this.pitzerState ? this.pitzerState.osmoticExcess : null;
+  /**
+   * The ions' osmotic excess Σ m_i(φ − 1), osmol/kg, from Pitzer's equations at the last solve's
+   * speciation with the molalities c/w (w kg of water per litre), or null when the last solve did
+   * not apply the Pitzer model.
+   */
+  pitzerOsmoticExcess(waterPerLitre: number): number | null {
+    return this.pitzerApplied && this.pitzerState ? this.pitzerState.osmoticExcessScaled(1 / waterPerLitre, this.core.debyeA) : null;
   }
 
   /**

@@ -8,6 +8,7 @@
  */
 import { debyeHuckelA, solveEquilibrium } from "../../src/chem";
 import { osmoticSlope, PitzerModel } from "../../src/chem/activity/pitzer";
+import { osmolality } from "../../src/chem/osmolality";
 import { casesOf, type ReferenceCase } from "../reference";
 import * as f from "./fixtures";
 
@@ -124,5 +125,35 @@ describe("the solve under Pitzer", () => {
     const down = solveEquilibrium(mix.concat([{ component: f.NaOH, conc: 0 }]), { activity: "pitzer" });
     if (!up.ok || !down.ok) throw new Error("solve failed");
     f.expectRel(r.beta, d / (up.pH - down.pH), 2e-3, "β against a forward difference of 1e-4 M NaOH");
+  });
+});
+
+describe("osmolality under Pitzer (src/chem/osmolality.ts)", () => {
+  test.each(casesOf("pitzer-osmotic-nacl-kcl"))("$id: the osmolality of $label gives φ $printed (the salt's mol/L chosen so that c/w is the molality)", (c) => {
+    const [name, m] = c.mixture![0];
+    const comp = f.referenceMixture([[name, m]])[0].component;
+    let conc = 0.97 * m; // a litre of 1 mol/kg NaCl holds about 0.98 mol: start below the 1 mol/L limit
+    let value = NaN;
+    for (let k = 0; k < 3; k++) {
+      const r = osmolality([{ component: comp, conc }], { activity: "pitzer" });
+      if (!r.ok) throw new Error(r.message);
+      expect(r.model).toBe("pitzer");
+      value = r.value;
+      conc = m * r.waterPerLitre;
+    }
+    // H⁺ and OH⁻ add about 2e-7 osmol/kg: far below the tolerance
+    f.expectReference(value / (2 * m), c, `φ from the osmolality of ${c.label}`);
+  });
+
+  test("0.9 % w/v saline (9 g/L NaCl) reads about 286 mOsm/kg (common practice), within 0.5 % under Pitzer", () => {
+    const r = osmolality([{ component: f.NaCl, conc: 9 / 58.443 }], { activity: "pitzer" });
+    if (!r.ok) throw new Error(r.message);
+    f.expectRel(r.value * 1000, 286, 0.005, "0.9 % saline, Pitzer");
+  });
+
+  test("another model says so: Davies gives its own term and names itself", () => {
+    const r = osmolality([{ component: f.NaCl, conc: 0.1 }]);
+    if (!r.ok) throw new Error(r.message);
+    expect(r.model).toBe("davies");
   });
 });
