@@ -20,7 +20,7 @@
  * 1 mol/L NaCl the molality is about 2 % higher, which moves ln γ± by under 0.005.
  */
 import { daviesLog10Gamma } from "./activity/davies";
-import { analogueOf, binaryParameters, COVERED_IONS, osmoticSlope, PitzerModel } from "./activity/pitzer";
+import { analogueOf, binaryParameters, COVERED_IONS, osmoticSlope, pitzerModelFor, type PitzerModel } from "./activity/pitzer";
 import { strongIonName, systemSpeciesName } from "./activity/pitzer-ions";
 import type { Aggregate } from "./aggregate";
 import { DEFAULTS, LIMITS } from "./defaults";
@@ -77,7 +77,7 @@ export class PitzerState {
         this.speciesIon.push(z === 0 ? -1 : add(systemSpeciesName(sys.id, k), z));
       }
     }
-    this.model = new PitzerModel(this.names, this.charges);
+    this.model = pitzerModelFor(this.names, this.charges);
     this.m = this.strongM.map(() => 0);
     this.lnGamma = this.strongM.map(() => 0);
     this.lnGammaSpecies = this.speciesIon.map(() => 0);

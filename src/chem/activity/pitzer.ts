@@ -60,27 +60,6 @@ function jAndXjPrime(x: number, out: number[]): void {
 
 const jbuf = [0, 0];
 
-/** Eθ and Eθ′ for two like-signed charges zi, zj at I (0 when the charges are equal). */
-export function unsymmetricalMixing(zi: number, zj: number, I: number, Aphi: number, out: number[]): void {
-  if (zi === zj || I <= 0) {
-    out[0] = 0;
-    out[1] = 0;
-    return;
-  }
-  const s = 6 * Aphi * Math.sqrt(I);
-  const zz = zi * zj;
-  jAndXjPrime(s * zz, jbuf);
-  const jij = jbuf[0];
-  const xjij = jbuf[1];
-  jAndXjPrime(s * zi * zi, jbuf);
-  const jii = jbuf[0];
-  const xjii = jbuf[1];
-  jAndXjPrime(s * zj * zj, jbuf);
-  const e = (zz / (4 * I)) * (jij - 0.5 * jii - 0.5 * jbuf[0]);
-  out[0] = e;
-  out[1] = -e / I + (zz / (8 * I * I)) * (xjij - 0.5 * xjii - 0.5 * jbuf[1]);
-}
-
 /** Parameter key of an unordered set of ion names. */
 function setKey(names: readonly string[]): string {
   return [...names].sort().join("|");
@@ -118,7 +97,8 @@ export class PitzerModel {
   private readonly like: number[] = [];
   // triplets with ψ ≠ 0: i, j (like-charged), k, ψ
   private readonly tri: number[] = [];
-  private readonly eth = [0, 0];
+  private readonly jv: number[] = [NaN, NaN, NaN, NaN, NaN, NaN, NaN, NaN, NaN, NaN];
+  private readonly xj: number[] = [NaN, NaN, NaN, NaN, NaN, NaN, NaN, NaN, NaN, NaN];
 
   constructor(names: readonly string[], charges: readonly number[]) {
     this.n = names.length;
@@ -149,6 +129,31 @@ export class PitzerModel {
     }
   }
 
+  /** J(sx·k), cached for this evaluation (k < 10). */
+  private J(k: number, sx: number): number {
+    const jv = this.jv;
+    if (k >= jv.length) {
+      jAndXjPrime(sx * k, jbuf);
+      return jbuf[0];
+    }
+    if (Number.isNaN(jv[k])) {
+      jAndXjPrime(sx * k, jbuf);
+      jv[k] = jbuf[0];
+      this.xj[k] = jbuf[1];
+    }
+    return jv[k];
+  }
+
+  /** x·J′(x) at x = sx·k, cached with J. */
+  private XJ(k: number, sx: number): number {
+    if (k >= this.jv.length) {
+      jAndXjPrime(sx * k, jbuf);
+      return jbuf[1];
+    }
+    this.J(k, sx);
+    return this.xj[k];
+  }
+
   /**
    * ln γ of every ion into lnGamma (length n) at molalities m (mol/kg) and osmotic slope Aφ.
    * Returns Σ m_i (φ − 1) over these ions (the osmotic excess, mol/kg); the ionic strength used is
@@ -176,17 +181,31 @@ export class PitzerModel {
     let osm = (-Aphi * I * sI) / bs;
     let cc = 0;
     const ca = this.ca;
+    // α1 = 2 for every pair but 2:2 salts: g, g′ and e^{−x} at x = 2√I computed once
+    const x2 = 2 * sI;
+    const g2 = g(x2);
+    const gp2 = gPrime(x2);
+    const e2 = Math.exp(-x2);
     for (let p = 0; p < ca.length; p += 8) {
       const c = ca[p];
       const a = ca[p + 1];
       const b0 = ca[p + 2];
       const b1 = ca[p + 3];
       const b2 = ca[p + 4];
-      const x1 = ca[p + 5] * sI;
       const C = ca[p + 7];
-      let B = b0 + b1 * g(x1);
-      let Bp = b1 * gPrime(x1);
-      let Bphi = b0 + b1 * Math.exp(-x1);
+      let B: number;
+      let Bp: number;
+      let Bphi: number;
+      if (ca[p + 5] === 2) {
+        B = b0 + b1 * g2;
+        Bp = b1 * gp2;
+        Bphi = b0 + b1 * e2;
+      } else {
+        const x1 = ca[p + 5] * sI;
+        B = b0 + b1 * g(x1);
+        Bp = b1 * gPrime(x1);
+        Bphi = b0 + b1 * Math.exp(-x1);
+      }
       if (b2 !== 0) {
         const x2 = ca[p + 6] * sI;
         B += b2 * g(x2);
@@ -205,18 +224,34 @@ export class PitzerModel {
       osm += mm * (Bphi + Z * C);
     }
     const like = this.like;
-    const eth = this.eth;
-    for (let p = 0; p < like.length; p += 3) {
-      const i = like[p];
-      const j = like[p + 1];
-      unsymmetricalMixing(z[i], z[j], I, Aphi, eth);
-      const Phi = like[p + 2] + eth[0];
-      const mi = m[i];
-      const mj = m[j];
-      F += mi * mj * eth[1];
-      lnGamma[i] += 2 * mj * Phi;
-      lnGamma[j] += 2 * mi * Phi;
-      osm += mi * mj * (Phi + I * eth[1]);
+    if (like.length > 0) {
+      // J(x) and x·J′(x) at x = 6Aφ√I·k for the charge products k met here (1 … 9 for |z| ≤ 3):
+      // each evaluated once per call rather than three times per pair.
+      const sx = 6 * Aphi * sI;
+      const jv = this.jv;
+      for (let k = 0; k < jv.length; k++) jv[k] = NaN;
+      for (let p = 0; p < like.length; p += 3) {
+        const i = like[p];
+        const j = like[p + 1];
+        const zi = z[i];
+        const zj = z[j];
+        let e = 0;
+        let ep = 0;
+        if (zi !== zj) {
+          const zz = zi * zj;
+          const ii = zi * zi;
+          const jj = zj * zj;
+          e = (zz / (4 * I)) * (this.J(zz, sx) - 0.5 * this.J(ii, sx) - 0.5 * this.J(jj, sx));
+          ep = -e / I + (zz / (8 * I * I)) * (this.XJ(zz, sx) - 0.5 * this.XJ(ii, sx) - 0.5 * this.XJ(jj, sx));
+        }
+        const Phi = like[p + 2] + e;
+        const mi = m[i];
+        const mj = m[j];
+        F += mi * mj * ep;
+        lnGamma[i] += 2 * mj * Phi;
+        lnGamma[j] += 2 * mi * Phi;
+        osm += mi * mj * (Phi + I * ep);
+      }
     }
     const tri = this.tri;
     for (let p = 0; p < tri.length; p += 4) {
@@ -235,4 +270,18 @@ export class PitzerModel {
     }
     return 2 * osm;
   }
+}
+
+/** Models compiled so far, by ion list (at most 256): preparing many mixtures of the same ions compiles once. */
+const compiled = new Map<string, PitzerModel>();
+
+/** The PitzerModel for these ions (shared: evaluate() keeps no state between calls that callers rely on). */
+export function pitzerModelFor(names: readonly string[], charges: readonly number[]): PitzerModel {
+  const key = names.map((n, i) => `${n}:${charges[i]}`).join(",");
+  let model = compiled.get(key);
+  if (model === undefined) {
+    model = new PitzerModel(names, charges);
+    if (compiled.size < 256) compiled.set(key, model);
+  }
+  return model;
 }
