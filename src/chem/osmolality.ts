@@ -35,6 +35,7 @@ import data from "./data/osmotic.json";
 import { activityShape } from "./activity/model";
 import { debyeHuckelA } from "./activity/debye-huckel-a";
 import { prepare } from "./prepared";
+import { ACTIVITY_MODELS, ION_SPECIFIC_START } from "./activity/models";
 import { fail, fmt } from "./failure";
 import type { ChemOptions, Component, Mixture, Result } from "./types";
 import { resolveOptions } from "./validate-options";
@@ -133,7 +134,8 @@ export function osmolality(mix: Mixture, opts: ChemOptions = {}): Result<Osmolal
   return {
     ok: true,
     value: ideal + electrostatic + nonElectrolyte,
-    model: pitzer === null ? o.activity : "pitzer",
+    // an ion-specific model not applied (a mixture with complexes) falls back to its start model's shape
+    model: pitzer === null && ACTIVITY_MODELS[o.activity].ionSpecific ? ION_SPECIFIC_START : o.activity,
     waterPerLitre: w,
     ionicStrength: Im,
     ideal,
