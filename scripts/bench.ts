@@ -518,7 +518,7 @@ const parts: Record<string, () => void | Promise<void>> = {
   c: partC,
   d: partD,
   e: partE,
-  f: () => partF(root, quick),
+  f: () => partF(root, quick, build),
   g: () => partStartup(root, quick ? 3 : 7, table),
 };
 

@@ -187,7 +187,9 @@ function shapeOfArgument(plugin: { evaluateAst: Function }, ast: any, state: Sta
 
 function sizeOf(rows: unknown[][]): ArraySize {
   const height = Math.max(1, rows.length);
-  const width = Math.max(1, ...rows.map((r) => r.length));
+  // A loop, not Math.max(...widths): a table of 200 000 rows overflows the call stack as arguments.
+  let width = 1;
+  for (const r of rows) if (r.length > width) width = r.length;
   return new ArraySize(width, height);
 }
 

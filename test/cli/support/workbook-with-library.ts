@@ -7,10 +7,10 @@
  * confirm the layout against a file it saved.
  */
 import ExcelJS from "exceljs";
-import JSZip from "jszip";
 import { createWorkbookSettingsStorage, makeBlob, type SettingsContextLike } from "../../../src/library";
 import type { LibraryDoc } from "../../../src/library/types";
 import { ADDIN_ID } from "../../../src/cli/workbook-library";
+import { readParts, writeParts } from "./zip-parts";
 
 /** The text the add-in's storage code hands to `workbook.settings.add` for this library. */
 export async function storedSettingText(doc: LibraryDoc): Promise<{ key: string; text: string }> {
@@ -58,26 +58,29 @@ const TASKPANES =
 
 /** Adds web-extension parts (one per entry of `parts`, in order) to an XLSX made by exceljs. */
 export async function addWebExtensions(xlsx: Buffer, parts: string[]): Promise<Buffer> {
-  const zip = await JSZip.loadAsync(xlsx);
-  const types = await zip.file("[Content_Types].xml")!.async("string");
+  const zip = readParts(xlsx);
+  const text = (name: string): string => zip.get(name)!.toString("utf8");
   const overrides = parts
     .map((_, i) => `<Override PartName="/xl/webextensions/webextension${i + 1}.xml" ContentType="application/vnd.ms-office.webextension+xml"/>`)
     .join("");
-  zip.file(
+  zip.set(
     "[Content_Types].xml",
-    types.replace("</Types>", `${overrides}<Override PartName="/xl/webextensions/taskpanes.xml" ContentType="application/vnd.ms-office.webextensiontaskpanes+xml"/></Types>`),
+    Buffer.from(text("[Content_Types].xml").replace("</Types>", `${overrides}<Override PartName="/xl/webextensions/taskpanes.xml" ContentType="application/vnd.ms-office.webextensiontaskpanes+xml"/></Types>`)),
   );
-  const rels = await zip.file("_rels/.rels")!.async("string");
-  zip.file("_rels/.rels", rels.replace("</Relationships>", '<Relationship Id="rIdWe1" Type="http://schemas.microsoft.com/office/2011/relationships/webextensiontaskpanes" Target="xl/webextensions/taskpanes.xml"/></Relationships>'));
-  zip.file("xl/webextensions/taskpanes.xml", TASKPANES);
-  zip.file(
+  zip.set(
+    "_rels/.rels",
+    Buffer.from(text("_rels/.rels").replace("</Relationships>", '<Relationship Id="rIdWe1" Type="http://schemas.microsoft.com/office/2011/relationships/webextensiontaskpanes" Target="xl/webextensions/taskpanes.xml"/></Relationships>')),
+  );
+  const added = new Map<string, Buffer | string>(zip);
+  added.set("xl/webextensions/taskpanes.xml", TASKPANES);
+  added.set(
     "xl/webextensions/_rels/taskpanes.xml.rels",
     '<?xml version="1.0" encoding="UTF-8" standalone="yes"?>\r\n<Relationships xmlns="http://schemas.openxmlformats.org/package/2006/relationships">' +
       parts.map((_, i) => `<Relationship Id="rId${i + 1}" Type="http://schemas.microsoft.com/office/2011/relationships/webextension" Target="webextension${i + 1}.xml"/>`).join("") +
       "</Relationships>",
   );
-  parts.forEach((xml, i) => zip.file(`xl/webextensions/webextension${i + 1}.xml`, xml));
-  return zip.generateAsync({ type: "nodebuffer", compression: "DEFLATE" });
+  parts.forEach((xml, i) => added.set(`xl/webextensions/webextension${i + 1}.xml`, xml));
+  return writeParts(added);
 }
 
 /** A one-sheet workbook: rows of values and "=…" formulas. */
