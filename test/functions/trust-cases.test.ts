@@ -152,7 +152,7 @@ describe("item 6: a formula-derived molar mass has the cap of a typed one (1e6 g
 
 describe("item 7: AQ.CURVE labels the steepest point for what it is, and gives the stoichiometric equivalence", () => {
   // 2.52 mM sodium acetate, 45.2 mL, titrated with 0.0484 M HCl: stoichiometric 0.00252·45.2/48.4 = 2.3534 mL
-  const FORMULA = '=AQ.CURVE("sodium acetate","2.52 mM","HCl",0.0484,"45.2 mL","5 mL",201)';
+  const FORMULA = '=AQ.CURVE("sodium acetate","2.52 mM","HCl",0.0484,0.0452,0.005,201)';
   const pHAt = (v: number) => num(`=AQ.PH({"sodium acetate";"HCl"},{${(0.00252 * 0.0452) / (0.0452 + v)};${(0.0484 * v) / (0.0452 + v)}})`);
 
   test(`${FORMULA}: "steepest point 1 (inflection)" and "stoichiometric equivalence 1", both with volume and pH`, () => {
