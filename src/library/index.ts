@@ -31,3 +31,5 @@ export { stampExport, exportFileName, withoutStamp, describeStamp } from "./expo
 export { pinNames, pinDrift, updatePin, dependenciesOf, putEntry, recordOf } from "./pin";
 export type { PinPlan, DriftItem } from "./pin";
 export { SOFTWARE_VERSION, SOFTWARE_NAME } from "./version";
+export { convertPKa, measuredConditionsText, AT_25C_WITHIN } from "./conditions";
+export type { PKaConversion } from "./conditions";

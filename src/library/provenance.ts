@@ -47,6 +47,7 @@ export function reviseValue(old: ValueRecord | undefined, next: ValueRecord): { 
   const cited = next.source !== undefined && next.locator !== undefined && (next.source !== old.source || next.locator !== old.locator);
   if (cited) return { record: next, reset: null };
   const record: ValueRecord = { value: next.value, unit: next.unit, conditions: next.conditions, status: next.status };
+  if (next.measured !== undefined) record.measured = next.measured;
   const newNote = next.note !== undefined && next.note !== old.note ? next.note : undefined;
   const chosen = next.status !== old.status && next.status !== "published" && newNote !== undefined;
   if (!chosen) record.status = "entered";

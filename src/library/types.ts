@@ -26,6 +26,22 @@ export interface ValueRecord {
   status: ValueStatus;
   /** Required for "common-practice" and "unverified": the reason. */
   note?: string;
+  /**
+   * pKa only: the value as measured at other conditions; `value` then holds it converted to 25 °C
+   * and I = 0 with the engine's models (conditions.ts), and the validator checks that it does.
+   */
+  measured?: MeasuredPKa;
+}
+
+/** A pKa as measured: at a temperature (°C) and ionic strength (mol/L), in a medium, on a scale. */
+export interface MeasuredPKa {
+  value: number;
+  temperature: number;
+  ionicStrength: number;
+  /** The salt or buffer medium ("KCl"): recorded; the activity model does not tell media apart. */
+  medium?: string;
+  /** "concentration" ([H⁺][B]/[A], the default) or "mixed" (a(H⁺)[B]/[A], a glass electrode's). */
+  scale?: "concentration" | "mixed";
 }
 
 export interface SourceRecord {

@@ -2,7 +2,7 @@
  * Words for what the browser shows: layers, statuses, citations, value lines. Pure functions,
  * tested without a DOM; the views put the results into text nodes.
  */
-import { describeProvenance, formatSource, LAYER_ORDER } from "../library";
+import { convertPKa, describeProvenance, formatSource, LAYER_ORDER } from "../library";
 import type { EntryKind, LayerName, MergedEntry, SourceRecord, SubstanceRecord, SystemRecord, IonRecord, ValueRecord } from "../library";
 import { STATUS_LABEL } from "./forms";
 
@@ -33,6 +33,8 @@ export interface ValueLine {
   flagged: boolean;
   /** The library's provenance line: citation with locator, or the reason for common practice / unverified. */
   provenance: string;
+  /** A pKa converted from measured conditions: how, and that the conversion adds uncertainty. */
+  conversion?: string;
 }
 
 export function valueLine(label: string, v: ValueRecord, sources: (id: string) => SourceRecord | undefined): ValueLine {
@@ -48,6 +50,21 @@ export function valueLine(label: string, v: ValueRecord, sources: (id: string) =
   };
 }
 
+/**
+ * A pKa line: one measured at other conditions shows its value at 25 °C, I = 0 (rounded; the
+ * engine uses the full value), the conversion's method and why it adds uncertainty.
+ */
+export function pKaLine(label: string, system: SystemRecord, k: number, sources: (id: string) => SourceRecord | undefined): ValueLine {
+  const step = system.steps[k];
+  const line = valueLine(label, step.pKa, sources);
+  const m = step.pKa.measured;
+  if (m === undefined) return line;
+  const c = convertPKa(m, step, system.topCharge, k);
+  line.amount = String(+step.pKa.value.toFixed(4));
+  line.conversion = c.ok ? `${c.method}. ${c.uncertainty}`.trim() : `cannot be converted: ${c.message}`;
+  return line;
+}
+
 /** Every value of an entry, in reading order. */
 export function valuesOf(entry: MergedEntry, sources: (id: string) => SourceRecord | undefined): ValueLine[] {
   switch (entry.kind) {
@@ -56,7 +73,7 @@ export function valuesOf(entry: MergedEntry, sources: (id: string) => SourceReco
       return r.steps.flatMap((s, i) => {
         const n = r.steps.length > 1 ? ` (step ${i + 1})` : "";
         return [
-          valueLine(`pKa${n}`, s.pKa, sources),
+          pKaLine(`pKa${n}`, r, i, sources),
           ...(s.dH ? [valueLine(`ΔrH°${n}`, s.dH, sources)] : []),
           ...(s.dCp ? [valueLine(`ΔrCp°${n}`, s.dCp, sources)] : []),
         ];
@@ -90,7 +107,7 @@ export function entrySummary(entry: MergedEntry): string {
   switch (entry.kind) {
     case "system": {
       const r = entry.record as SystemRecord;
-      return `pKa ${r.steps.map((s) => s.pKa.value).join(", ")}; top charge ${r.topCharge > 0 ? "+" : ""}${r.topCharge}`;
+      return `pKa ${r.steps.map((s) => +s.pKa.value.toFixed(4)).join(", ")}; top charge ${r.topCharge > 0 ? "+" : ""}${r.topCharge}`;
     }
     case "substance": {
       const r = entry.record as SubstanceRecord;

@@ -4,10 +4,10 @@
  * Pure: no DOM, no storage.
  */
 import { parseDecimalComma } from "../chem/number-text";
-import { pKbToPKa, PKW_25C, reviseValue } from "../library";
-import type { SourceRecord, StepRecord, SubstanceRecord, SystemRecord, ValueRecord } from "../library";
-import { readNumber, STATUS_LABEL } from "./forms";
-import type { Built, FieldIssue, SourceInput, SubstanceInput, SystemInput, ValueInput } from "./forms";
+import { convertPKa, measuredConditionsText, pKbToPKa, PKW_25C, reviseValue } from "../library";
+import type { MeasuredPKa, SourceRecord, StepRecord, SubstanceRecord, SystemRecord, ValueRecord } from "../library";
+import { DEFAULT_CONDITIONS, readNumber, STATUS_LABEL } from "./forms";
+import type { Built, FieldIssue, SourceInput, StepInput, SubstanceInput, SystemInput, ValueInput } from "./forms";
 
 const lines = (text: string): string[] =>
   text
@@ -47,7 +47,7 @@ export function buildValue(input: ValueInput, unit: string, path: string, issues
   if (record.status === "published" && record.source === undefined) {
     issues.push({ path: `${path}.source`, message: "a published value names its source: choose one (add it under 'Source' first — this draft is kept), or choose 'entered by the user'" });
   }
-  if ((record.status === "common-practice" || record.status === "unverified") && record.note === undefined && !override) {
+  if ((record.status === "common-practice" || record.status === "unverified") && record.note === undefined && !override?.note) {
     issues.push({ path: `${path}.note`, message: `a '${STATUS_LABEL[record.status]}' value says why in a note` });
   }
   const note = [record.note ?? "", override?.note ?? ""].filter((s) => s !== "").join("; ");
@@ -74,6 +74,48 @@ export function describePkbConversion(pKbText: string): string | null {
   return `pKa = pKw − pKb = ${PKW_25C.value} − ${pKb} = ${r.pKa} (pKw at 25 °C: CRC Handbook, after Marshall & Franck 1981)`;
 }
 
+/**
+ * The measured conditions typed for step `i` (null when none: the value is at 25 °C, I = 0), or the
+ * problems at their fields. Empty temperature means 25 °C, empty ionic strength 0.
+ */
+export function readMeasured(s: StepInput, i: number, issues: FieldIssue[]): Omit<MeasuredPKa, "value"> | null {
+  const m = s.measured;
+  if (m.temperature.trim() === "" && m.ionicStrength.trim() === "") return null;
+  const p = `steps[${i}].pKa.measured`;
+  const read = (text: string, fallback: number, key: string, what: string): number | null => {
+    if (text.trim() === "") return fallback;
+    const n = readNumber(text);
+    if (n === null) issues.push({ path: `${p}.${key}`, message: `${what}: ${numberProblem(text)}` });
+    return n;
+  };
+  const temperature = read(m.temperature, 25, "temperature", "temperature in °C");
+  const ionicStrength = read(m.ionicStrength, 0, "ionicStrength", "ionic strength in mol/L");
+  if (temperature === null || ionicStrength === null) return null;
+  if (s.enteredAsPkb) {
+    issues.push({ path: `${p}.temperature`, message: "a pKb is taken at 25 °C, I = 0: enter the pKa measured at these conditions instead, or clear them" });
+    return null;
+  }
+  const out: Omit<MeasuredPKa, "value"> = { temperature, ionicStrength, scale: m.scale };
+  if (m.medium.trim() !== "") out.medium = m.medium.trim();
+  return out;
+}
+
+/** "Stored as pKa 7.0912 at 25 °C, I = 0 — converted from …", the refusal, or null (no conditions, or no number yet). */
+export function describeMeasured(system: SystemInput, i: number): string | null {
+  const issues: FieldIssue[] = [];
+  const s = system.steps[i];
+  const m = readMeasured(s, i, issues);
+  if (issues.length) return issues.map((x) => x.message).join("; ");
+  const value = readNumber(s.pKa.value);
+  if (m === null || value === null) return null;
+  const dH = readNumber(s.dH.value);
+  const dCp = readNumber(s.dCp.value);
+  const step = { dH: dH === null ? undefined : { value: dH, unit: "kJ/mol", conditions: "", status: "entered" as const }, dCp: dCp === null ? undefined : { value: dCp, unit: "J/(K·mol)", conditions: "", status: "entered" as const } };
+  const c = convertPKa({ ...m, value }, step, readNumber(system.topCharge) ?? 0, i);
+  if (!c.ok) return `Cannot convert: ${c.message}.`;
+  return `Stored as pKa ${+c.value.toFixed(4)} at 25 °C, I = 0 — ${c.method}. ${c.uncertainty}`.trim();
+}
+
 export function buildSystem(input: SystemInput): Built<SystemRecord> {
   const issues: FieldIssue[] = [];
   const notes: string[] = [];
@@ -93,10 +135,27 @@ export function buildSystem(input: SystemInput): Built<SystemRecord> {
         }
       }
     }
-    const pKa = buildValue(s.pKa, "1", `${p}.pKa`, issues, false, override, notes);
-    const step: StepRecord = { pKa: pKa as ValueRecord };
+    const measured = readMeasured(s, i, issues);
     const dH = buildValue(s.dH, "kJ/mol", `${p}.dH`, issues, true, undefined, notes);
     const dCp = buildValue(s.dCp, "J/(K·mol)", `${p}.dCp`, issues, true, undefined, notes);
+    const typed = readNumber(s.pKa.value);
+    if (measured && typed !== null && topCharge !== null) {
+      const c = convertPKa({ ...measured, value: typed }, { dH, dCp }, topCharge, i);
+      if (!c.ok) issues.push({ path: `${p}.pKa.measured.${/ΔrH°|°C/.test(c.message) && !/ionic strength/i.test(c.message) ? "temperature" : "ionicStrength"}`, message: c.message });
+      else {
+        override = { value: c.value, note: "" };
+        notes.push(`step ${i + 1}: ${c.method}. ${c.uncertainty}`.trim());
+      }
+    }
+    // The conditions text of a converted value is written here; cleared conditions leave no stale text.
+    const conditions = measured && override ? `converted to 25 °C, I = 0 from ${measuredConditionsText({ ...measured, value: typed as number })}` : s.pKa.conditions.startsWith("converted to 25 °C") ? DEFAULT_CONDITIONS : s.pKa.conditions;
+    const pKaInput = { ...s.pKa, conditions };
+    const pKa = buildValue(pKaInput, "1", `${p}.pKa`, issues, false, override, notes);
+    if (pKa && measured && override) {
+      pKa.measured = { value: typed as number, ...measured };
+      if (pKa.note === "") delete pKa.note;
+    }
+    const step: StepRecord = { pKa: pKa as ValueRecord };
     if (dH) step.dH = dH;
     if (dCp) step.dCp = dCp;
     return step;

@@ -23,8 +23,20 @@ export interface ValueInput {
   origin?: ValueRecord;
 }
 
+/** Where a pKa was measured, as typed; all empty = at 25 °C, I = 0 (or only the Conditions text). */
+export interface MeasuredInput {
+  /** °C. */
+  temperature: string;
+  /** mol/L. */
+  ionicStrength: string;
+  medium: string;
+  scale: "concentration" | "mixed";
+}
+
 export interface StepInput {
   pKa: ValueInput;
+  /** The pKa value field holds a value measured at these conditions; stored converted to 25 °C, I = 0. */
+  measured: MeasuredInput;
   /** The value field holds a pKb of the base (25 °C); stored as the conjugate acid's pKa. */
   enteredAsPkb: boolean;
   dH: ValueInput;
@@ -96,8 +108,12 @@ export function emptyValue(conditions = DEFAULT_CONDITIONS): ValueInput {
   return { value: "", conditions, status: "entered", source: "", locator: "", note: "" };
 }
 
+export function emptyMeasured(): MeasuredInput {
+  return { temperature: "", ionicStrength: "", medium: "", scale: "concentration" };
+}
+
 export function emptyStep(): StepInput {
-  return { pKa: emptyValue(), enteredAsPkb: false, dH: emptyValue(), dCp: emptyValue() };
+  return { pKa: emptyValue(), measured: emptyMeasured(), enteredAsPkb: false, dH: emptyValue(), dCp: emptyValue() };
 }
 
 export function emptySystem(): SystemInput {

@@ -1,13 +1,22 @@
 /** Library records → the editor's fields, to edit or duplicate an entry. Pure: no DOM, no storage. */
 import type { SourceRecord, SubstanceRecord, SystemRecord, ValueRecord } from "../library";
-import { DEFAULT_CONDITIONS, emptyValue } from "./forms";
-import type { SourceInput, SubstanceInput, SystemInput, ValueInput } from "./forms";
+import { DEFAULT_CONDITIONS, emptyMeasured, emptyValue } from "./forms";
+import type { MeasuredInput, SourceInput, SubstanceInput, SystemInput, ValueInput } from "./forms";
 
 const num = (n: number | undefined): string => (n === undefined ? "" : String(n));
 
 export function valueToInput(v: ValueRecord | undefined, conditions = DEFAULT_CONDITIONS): ValueInput {
   if (!v) return emptyValue(conditions);
   return { value: String(v.value), conditions: v.conditions, status: v.status, source: v.source ?? "", locator: v.locator ?? "", note: v.note ?? "", origin: v };
+}
+
+/** A pKa measured at other conditions opens as measured: its value field holds the measured value. */
+function pKaToInput(v: ValueRecord): { pKa: ValueInput; measured: MeasuredInput } {
+  const pKa = valueToInput(v);
+  const m = v.measured;
+  if (m === undefined) return { pKa, measured: emptyMeasured() };
+  pKa.value = String(m.value);
+  return { pKa, measured: { temperature: String(m.temperature), ionicStrength: String(m.ionicStrength), medium: m.medium ?? "", scale: m.scale ?? "concentration" } };
 }
 
 export function systemToInput(r: SystemRecord): SystemInput {
@@ -17,7 +26,7 @@ export function systemToInput(r: SystemRecord): SystemInput {
     topCharge: String(r.topCharge),
     speciesNames: (r.speciesNames ?? []).join("\n"),
     note: r.note ?? "",
-    steps: r.steps.map((s) => ({ pKa: valueToInput(s.pKa), enteredAsPkb: false, dH: valueToInput(s.dH), dCp: valueToInput(s.dCp) })),
+    steps: r.steps.map((s) => ({ ...pKaToInput(s.pKa), enteredAsPkb: false, dH: valueToInput(s.dH), dCp: valueToInput(s.dCp) })),
   };
 }
 

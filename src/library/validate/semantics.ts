@@ -3,6 +3,7 @@
  * elements that exist (in this file or in the layers below it), species-name counts, formulas that
  * parse, charge balance of each weighed form, and lookup names that mean one substance only.
  */
+import { convertPKa } from "../conditions";
 import { molarMassOf, parseFormula } from "../formula";
 import { normalizeName } from "../normalize";
 import type { IonRecord, LibraryDoc, SourceRecord, SubstanceRecord, SystemRecord, ValidationIssue, ValueRecord } from "../types";
@@ -43,9 +44,22 @@ export function worldOf(docs: readonly LibraryDoc[]): World {
   return { sources, systems, ions, elements, atomicWeights };
 }
 
-function checkValue(v: ValueRecord | undefined, path: string, world: World, out: SemanticIssue[]): void {
+function checkValue(v: ValueRecord | undefined, path: string, world: World, out: SemanticIssue[], pKa = false): void {
   if (v?.source !== undefined && !world.sources.has(v.source)) {
     out.push({ path: childPath(path, "source"), message: `unknown source '${v.source}' (add it to sources)`, reference: true });
+  }
+  if (v?.measured !== undefined && !pKa) out.push({ path: childPath(path, "measured"), message: "only a pKa is converted from measured conditions" });
+}
+
+/** A pKa with measured conditions must hold their conversion to 25 °C, I = 0 (conditions.ts). */
+function checkMeasured(s: SystemRecord, k: number, path: string, out: SemanticIssue[]): void {
+  const step = s.steps[k];
+  const m = step.pKa.measured;
+  if (m === undefined) return;
+  const c = convertPKa(m, step, s.topCharge, k);
+  if (!c.ok) out.push({ path: childPath(path, "measured"), message: c.message });
+  else if (Math.abs(c.value - step.pKa.value) > 5e-4) {
+    out.push({ path: childPath(path, "value"), message: `${step.pKa.value} is not the measured ${m.value} converted to 25 °C, I = 0 (${+c.value.toFixed(6)})` });
   }
 }
 
@@ -55,7 +69,8 @@ export function checkSystem(s: SystemRecord, path: string, world: World, out: Se
   }
   s.steps.forEach((step, i) => {
     const p = childPath(childPath(path, "steps"), i);
-    checkValue(step.pKa, childPath(p, "pKa"), world, out);
+    checkValue(step.pKa, childPath(p, "pKa"), world, out, true);
+    checkMeasured(s, i, childPath(p, "pKa"), out);
     checkValue(step.dH, childPath(p, "dH"), world, out);
     checkValue(step.dCp, childPath(p, "dCp"), world, out);
   });

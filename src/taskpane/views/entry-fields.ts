@@ -5,7 +5,7 @@
  */
 import type { IonRecord, Library, SystemRecord } from "../../library";
 import { el } from "../dom";
-import { describePkbConversion } from "../form-to-record";
+import { describeMeasured, describePkbConversion } from "../form-to-record";
 import { emptyStep, type SourceInput, type StepInput, type SubstanceInput, type SystemInput } from "../forms";
 import { button, field, select, textArea, textInput } from "./ui";
 import { idField, valueFields } from "./value-fields";
@@ -73,7 +73,7 @@ function stepFields(ctx: FieldsContext, system: SystemInput, s: StepInput, i: nu
     showConversion();
   });
   const pkbRow = el("div", {}, el("div", { class: "check" }, pkb, el("label", { for: pkb.id }, "The value is the pKb of the base (25 °C)")), conversion);
-  const pKa = valueFields(ctx.library, s.pKa, `${p}.pKa`, "pKa at 25 °C, I = 0 (or pKb)", pkbRow);
+  const pKa = valueFields(ctx.library, s.pKa, `${p}.pKa`, "pKa (or pKb)", el("div", {}, pkbRow, measuredFields(s, i)));
   pKa.querySelector<HTMLInputElement>(`[data-path="${p}.pKa.value"]`)?.addEventListener("input", showConversion);
   showConversion();
   const thermo = el(
@@ -83,11 +83,47 @@ function stepFields(ctx: FieldsContext, system: SystemInput, s: StepInput, i: nu
     valueFields(ctx.library, s.dH, `${p}.dH`, "ΔrH°, kJ/mol (dissociation of the acid form)"),
     valueFields(ctx.library, s.dCp, `${p}.dCp`, "ΔrCp°, J/(K·mol)"),
   );
+  const converted = pKa.querySelector<HTMLElement>(".measured-conversion");
+  const showMeasured = (): void => {
+    if (converted) converted.textContent = describeMeasured(system, i) ?? "Without a temperature or ionic strength here, the value is taken at 25 °C, I = 0.";
+  };
+  showMeasured();
   const remove = system.steps.length > 1 ? button(`Remove step ${i + 1}`, () => {
     system.steps.splice(i, 1);
     ctx.render();
   }) : null;
-  return el("fieldset", { class: "step" }, el("legend", {}, `Step ${i + 1}`), pKa, thermo, remove ? el("div", { class: "actions" }, remove) : null);
+  const box = el("fieldset", { class: "step" }, el("legend", {}, `Step ${i + 1}`), pKa, thermo, remove ? el("div", { class: "actions" }, remove) : null);
+  box.addEventListener("input", showMeasured);
+  box.addEventListener("change", showMeasured);
+  return box;
+}
+
+/**
+ * Where the pKa was measured: temperature, ionic strength, medium and scale. Filled in, the value is
+ * stored converted to 25 °C and I = 0 (the library's conversion, shown live with its method).
+ */
+function measuredFields(s: StepInput, i: number): HTMLElement {
+  const m = s.measured;
+  const p = `steps[${i}].pKa.measured`;
+  const scales = [["concentration", "concentration, [H⁺][B]/[A]"], ["mixed", "mixed, a(H⁺)[B]/[A] (glass electrode)"]] as const;
+  return el(
+    "details",
+    { class: "measured", open: m.temperature !== "" || m.ionicStrength !== "" },
+    el("summary", {}, "Measured at another temperature or ionic strength"),
+    el(
+      "div",
+      { class: "row" },
+      field("Temperature, °C", textInput(m.temperature, (v) => (m.temperature = v), { inputmode: "decimal", placeholder: "25" }), { path: `${p}.temperature` }).wrap,
+      field("Ionic strength, mol/L", textInput(m.ionicStrength, (v) => (m.ionicStrength = v), { inputmode: "decimal", placeholder: "0" }), { path: `${p}.ionicStrength` }).wrap,
+    ),
+    el(
+      "div",
+      { class: "row" },
+      field("Medium (optional)", textInput(m.medium, (v) => (m.medium = v), { placeholder: "KCl" }), { path: `${p}.medium` }).wrap,
+      field("Scale at that ionic strength", select(m.scale, scales, (v) => (m.scale = v)), { path: `${p}.scale` }).wrap,
+    ),
+    el("p", { class: "conversion measured-conversion", "aria-live": "polite" }),
+  );
 }
 
 /** A substance form: names, formula or molar mass, nature, the systems and counter-ions it releases. */

@@ -1,0 +1,81 @@
+/**
+ * Issue 17, second round, in the pane as a user meets it (headless Chromium, 350 px wide): a pKa
+ * measured at 37 °C and I = 0.15 mol/L (KCl) converted to 25 °C, I = 0 with its method and the
+ * uncertainty it adds, and refused without ΔrH°. Screenshots go to test-artifacts/ (qa2-*.png).
+ */
+import * as fs from "fs";
+import * as path from "path";
+import type { Page } from "playwright-core";
+import { convertPKa } from "../../src/library";
+import { routeOffice, ROOT } from "./support/browser";
+import { waitForText } from "./support/page-watch";
+import { NO_PROBLEMS, startPane, type PaneSession } from "./support/pane-session";
+
+jest.setTimeout(120000);
+
+const ARTIFACTS = path.join(ROOT, "test-artifacts");
+
+async function tab(page: Page, name: string): Promise<void> {
+  await page.getByRole("tab", { name }).click();
+}
+
+async function open(page: Page, kind: string, id: string, query: string) {
+  await tab(page, "Browse");
+  await page.fill("#search", query);
+  const item = page.locator(`#entries li[data-kind="${kind}"][data-id="${id}"]`);
+  if ((await item.locator(".entry-head").getAttribute("aria-expanded")) !== "true") await item.locator(".entry-head").click();
+  return item;
+}
+
+describe("issue 17, second round (pane in Chromium)", () => {
+  let session: PaneSession;
+  let page: Page;
+
+  beforeAll(async () => {
+    fs.mkdirSync(ARTIFACTS, { recursive: true });
+    session = await startPane({ route: (context, requests) => routeOffice(context, "npm", requests), width: 350 });
+    ({ page } = session);
+  });
+
+  afterAll(async () => {
+    await session?.close();
+  });
+
+  afterEach(async () => {
+    expect(await session.problems()).toEqual(NO_PROBLEMS);
+  });
+
+  test("a pKa measured at 37 °C, I = 0.15 M (KCl): refused without ΔrH°, then converted with its method and the uncertainty it adds", async () => {
+    await tab(page, "Add / edit");
+    await page.getByLabel("Name", { exact: true }).fill("HB sulfonate buffer");
+    await page.fill('[data-path="steps[0].pKa.value"]', "6.93");
+    await page.getByText("Measured at another temperature or ionic strength").click();
+    await page.fill('[data-path="steps[0].pKa.measured.temperature"]', "37");
+    await page.fill('[data-path="steps[0].pKa.measured.ionicStrength"]', "0.15");
+    await page.fill('[data-path="steps[0].pKa.measured.medium"]', "KCl");
+    await waitForText(page.locator(".measured-conversion").first(), /Cannot convert: measured at 37 °C, but the step has no ΔrH°/);
+    await page.click("#editor-save");
+    const err = await waitForText(page.locator('[data-path="steps[0].pKa.measured.temperature"] ~ .field-error'), /no ΔrH°/);
+    expect(err).toMatch(/give ΔrH°/);
+    await page.getByText("ΔrH° and ΔrCp° (optional, for temperature effects)").click();
+    await page.fill('[data-path="steps[0].dH.value"]', "21.1");
+    const c = convertPKa({ value: 6.93, temperature: 37, ionicStrength: 0.15, medium: "KCl", scale: "concentration" }, { dH: { value: 21.1, unit: "kJ/mol", conditions: "", status: "entered" } }, 0, 0);
+    if (!c.ok) throw new Error(c.message);
+    const live = await waitForText(page.locator(".measured-conversion").first(), /Stored as pKa/);
+    expect(live).toContain(`Stored as pKa ${+c.value.toFixed(4)} at 25 °C, I = 0`);
+    expect(live).toMatch(/The conversion adds uncertainty/);
+    await page.click("#editor-save");
+    const saved = await waitForText(page.locator("#editor-errors"), /Saved 'HB sulfonate buffer'/);
+    expect(saved).toMatch(/van 't Hoff with ΔrH° 21\.1 kJ\/mol/);
+    const item = await open(page, "system", "hb-sulfonate-buffer", "HB sulfonate");
+    const text = await item.innerText();
+    expect(text).toContain(`pKa = ${+c.value.toFixed(4)} (converted to 25 °C, I = 0 from 37 °C, I = 0.15 mol/L (KCl), concentration scale)`);
+    expect(text).toMatch(/Davies activity coefficients for the pair of charges 0\/−1.*The conversion adds uncertainty/s);
+    // (a full-page screenshot resizes the page for a moment: taken after the clicks, not before)
+    await page.screenshot({ path: path.join(ARTIFACTS, "qa2-measured-350.png"), fullPage: true });
+    await item.getByRole("button", { name: /^Edit/ }).first().click();
+    expect(await page.locator('[data-path="steps[0].pKa.value"]').inputValue()).toBe("6.93");
+    expect(await page.locator('[data-path="steps[0].pKa.measured.temperature"]').inputValue()).toBe("37");
+    await page.getByRole("button", { name: "Cancel editing" }).click();
+  });
+});
