@@ -155,7 +155,7 @@ export class BrowseView {
                 el("span", {}, ` (${v.conditions})`),
                 el("span", { class: `badge ${v.flagged ? "flag" : "layer-builtin"}` }, v.statusText),
                 v.provenance ? el("span", { class: "ref" }, ref(v.provenance)) : null,
-                v.conversion ? el("p", { class: "hint conversion" }, v.conversion) : null,
+                v.conversion ? el("p", { class: "hint converted" }, v.conversion) : null,
               ),
             ),
           )

@@ -122,7 +122,7 @@ function measuredFields(s: StepInput, i: number): HTMLElement {
       field("Medium (optional)", textInput(m.medium, (v) => (m.medium = v), { placeholder: "KCl" }), { path: `${p}.medium` }).wrap,
       field("Scale at that ionic strength", select(m.scale, scales, (v) => (m.scale = v)), { path: `${p}.scale` }).wrap,
     ),
-    el("p", { class: "conversion measured-conversion", "aria-live": "polite" }),
+    el("p", { class: "hint measured-conversion", "aria-live": "polite" }),
   );
 }
 
