@@ -11,8 +11,8 @@ import path from "node:path";
 // 120 KB until the verified data (sources, temperature data, new substances) grew it to about
 // 120 KB on its own; the change record, pin and export stamp (about 8 KB) are the library's job too.
 // Complexes, solids, edetate and their sources (issue 21) added about 10 KB of data.
-// The measured conditions of a pKa (schema, the conversion, its words and checks) about 2 KB.
-const LIBRARY_BUDGET_BYTES = 154 * 1024;
+// The measured conditions of a pKa (schema, the conversion, its words and checks) about 3.5 KB.
+const LIBRARY_BUDGET_BYTES = 158 * 1024;
 
 const bundle = (entry: string) =>
   buildSync({
