@@ -157,3 +157,30 @@ describe("osmolality under Pitzer (src/chem/osmolality.ts)", () => {
     expect(r.model).toBe("davies");
   });
 });
+
+describe("properties under Pitzer over random mixtures of the fixtures (seeded)", () => {
+  const comps = [f.aceticAcid, f.sodiumAcetate, f.NaH2PO4, f.Na2HPO4, f.KH2PO4, f.citricAcid, f.trisBase, f.HCl, f.NaOH, f.NaCl, f.KCl, f.NaHCO3, f.Na2CO3, f.borax];
+  let seed = 12345;
+  const rnd = () => (seed = (seed * 16807) % 2147483647) / 2147483647;
+  const cases = Array.from({ length: 300 }, () => {
+    const k = 1 + Math.floor(rnd() * 4);
+    const mix = Array.from({ length: k }, () => ({ component: comps[Math.floor(rnd() * comps.length)], conc: Math.pow(10, -4 + 3.3 * rnd()) }));
+    return { mix, temperatureC: 5 + 90 * rnd() };
+  });
+
+  test("every mixture the Davies solve answers is answered: charge balance closed, β > 0, and within 0.06 pH of Davies below I = 0.1 mol/L (both tend to the limiting law)", () => {
+    let checked = 0;
+    for (const { mix, temperatureC } of cases) {
+      const d = solveEquilibrium(mix, { temperatureC, activity: "davies" });
+      if (!d.ok) continue;
+      const p = solveEquilibrium(mix, { temperatureC, activity: "pitzer" });
+      const where = { mix: mix.map((e) => `${e.component.name} ${e.conc}`).join(", "), temperatureC };
+      expect({ ...where, ok: p.ok }).toEqual({ ...where, ok: true });
+      if (!p.ok) continue;
+      expect({ ...where, residual: p.residual < 1e-9, beta: p.beta > 0 && Number.isFinite(p.beta) }).toEqual({ ...where, residual: true, beta: true });
+      if (d.ionicStrength < 0.1) expect({ ...where, close: Math.abs(p.pH - d.pH) <= 0.06 }).toEqual({ ...where, close: true });
+      checked++;
+    }
+    expect(checked).toBeGreaterThan(250);
+  });
+});

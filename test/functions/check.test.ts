@@ -137,3 +137,16 @@ describe("AQ.CHECK: warnings and errors", () => {
     expect(r.message).toMatch(/2×1/);
   });
 });
+
+describe("AQ.CHECK under the Pitzer model (issue 20: a fallback rule is flagged)", () => {
+  test("Tris–HCl: TrisH⁺ has no Pitzer parameters here, so CHECK names the Davies fallback", () => {
+    const f = '=AQ.CHECK({"Tris";"HCl"},{0.1;0.05},25,"pitzer")';
+    expect(check(f)).toMatch(/^CHECK: buffer.*No published Pitzer parameters here for TrisH\+: Davies activity is used for that ion\.$/);
+  });
+  test("McIlvaine-type citrate–phosphate: the citrate anions borrow the phosphate parameters, and CHECK says so", () => {
+    expect(check('=AQ.CHECK({"citric acid";"Na2HPO4"},{0.02;0.06},25,"pitzer")')).toMatch(/HCit-2 \(as HPO4-2\).*not published values/);
+  });
+  test("a phosphate buffer with saline has every parameter: no fallback reason", () => {
+    expect(check('=AQ.CHECK({"NaH2PO4";"Na2HPO4";"NaCl"},{0.01;0.01;0.15},25,"pitzer")')).toMatch(/^OK: buffer/);
+  });
+});
