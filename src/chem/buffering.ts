@@ -57,14 +57,16 @@ export function assessBuffering(eq: Equilibrium, systems: readonly AcidBaseSyste
   let betaWeak = 0;
   let top: { system: AcidBaseSystem; beta: number } | null = null;
   for (const system of systems) {
-    const sp = eq.species.filter((s) => s.systemId === system.id);
+    // The free forms only (the first steps + 1 species of the system; complexes follow them): the
+    // variance of protons lost among them, weighted by their own total.
+    const sp = eq.species.filter((s) => s.systemId === system.id).slice(0, system.steps.length + 1);
     const C = sp.reduce((a, s) => a + s.conc, 0);
     if (!(C > 0)) continue;
     let mean = 0;
     let square = 0;
     sp.forEach((s, k) => {
-      mean += k * s.fraction;
-      square += k * k * s.fraction;
+      mean += (k * s.conc) / C;
+      square += (k * k * s.conc) / C;
     });
     const beta = LN10 * C * Math.max(0, square - mean * mean);
     betaWeak += beta;

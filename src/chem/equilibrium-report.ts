@@ -11,7 +11,7 @@ import type { ChargeBalanceSolver } from "./solver-core";
 import { speciesName } from "./species-names";
 import type { Equilibrium, Failure, Species } from "./types";
 import { ComplexingSolver } from "./complex-solver";
-import { saturationIndices } from "./saturation";
+import { saturationIndices, saturationWarnings } from "./saturation";
 import { complexBufferValue, complexEnthalpyWarnings, complexingSystemSpecies, freeMetal, innerFailureMessage } from "./complex-report";
 import { pKw } from "./water";
 import { ionicStrengthWarning, missingEnthalpyWarnings } from "./warnings";
@@ -89,6 +89,7 @@ export function buildEquilibrium(core: ChargeBalanceSolver, agg: Aggregate): Equ
   warnings.push(...missingEnthalpyWarnings(agg.systems, agg.totals, core.temperatureC, pH));
   if (cx) warnings.push(...complexEnthalpyWarnings(cx, species));
   const saturation = saturationIndices(agg, species, pH, gammaH);
+  warnings.push(...saturationWarnings(saturation, core.temperatureC));
   return {
     ...(saturation.length > 0 ? { saturation } : {}),
     ok: true,

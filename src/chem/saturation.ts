@@ -32,3 +32,11 @@ export function saturationIndices(agg: Aggregate, species: readonly Species[], p
   }
   return out;
 }
+
+/** One warning per supersaturated solid (SI > 0), for the equilibrium's warnings (AQ.CHECK prints them). */
+export function saturationWarnings(saturation: readonly Saturation[], temperatureC: number): string[] {
+  const at = temperatureC === 25 ? "" : `; its Ksp is the 25 °C value, used at ${temperatureC} °C`;
+  return saturation
+    .filter((x) => x.saturationIndex > 0)
+    .map((x) => `Supersaturated in ${x.name} (saturation index +${x.saturationIndex.toFixed(2)}, from its solubility product${at}): a solid may form; the result is for the clear solution, no precipitation is modelled.`);
+}

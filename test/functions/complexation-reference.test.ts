@@ -4,6 +4,7 @@
  * and what users see of it through the spreadsheet functions.
  */
 import { solveEquilibrium, type Equilibrium, type Mixture } from "../../src/chem";
+import * as AQ from "../../src/functions/functions";
 import { getActiveLibrary } from "../../src/library";
 import { casesOf, referenceCase } from "../reference";
 import { expectReference } from "../chem/fixtures";
@@ -71,5 +72,41 @@ describe("identities with the library's complexes", () => {
     const without = solved(base);
     const withCa = solved([...base, ["calcium chloride dihydrate", 0.005]]);
     expect(withCa.pH).toBeLessThan(without.pH - 0.05);
+  });
+});
+
+describe("what users see: AQ.SPECIES and AQ.CHECK", () => {
+
+  test("AQ.SPECIES lists the free calcium ion and the calcium–citrate complexes, and their sums give the totals back", () => {
+    const rows = AQ.SPECIES([["calcium chloride dihydrate", "trisodium citrate dihydrate"]], [[0.001, 0.01]]) as [string, number, number, number][];
+    const conc = (name: string) => rows.find((r) => r[0] === name)![2];
+    expect(rows.map((r) => r[0])).toEqual(expect.arrayContaining(["Ca2+", "CaCit-", "CaHCit", "Cit^3-"]));
+    expect(Math.abs(conc("Ca2+") + conc("CaCit-") + conc("CaHCit") - 0.001)).toBeLessThan(1e-15);
+    const citrate = rows.filter((r) => ["H3Cit", "H2Cit-", "HCit^2-", "Cit^3-", "CaCit-", "CaHCit"].includes(r[0])).reduce((s, r) => s + r[2], 0);
+    expect(Math.abs(citrate - 0.01)).toBeLessThan(1e-15);
+  });
+
+  test("AQ.CHECK warns of calcium citrate supersaturation with the saturation index computed from the free ions", () => {
+    const names = [["calcium chloride dihydrate", "trisodium citrate dihydrate"]];
+    const eq = solved([["calcium chloride dihydrate", 0.02], ["trisodium citrate dihydrate", 0.02]]);
+    const si = eq.saturation!.find((x) => x.name === "calcium citrate tetrahydrate")!.saturationIndex;
+    // Identity: SI = 3·log a(Ca2+) + 2·log a(Cit3−) − log Ksp, with log γ(z) = z²·log γH.
+    const lg = Math.log10(eq.gammaH);
+    const la = (n: string) => {
+      const sp = eq.species.find((s) => s.name === n)!;
+      return Math.log10(sp.conc) + sp.charge * sp.charge * lg;
+    };
+    const logKsp = getActiveLibrary().system("citrate")!.solids!.find((x) => x.name === "calcium citrate tetrahydrate")!.logKsp;
+    expect(Math.abs(si - (3 * la("Ca2+") + 2 * la("Cit^3-") - logKsp))).toBeLessThan(1e-9);
+    expect(si).toBeGreaterThan(0);
+    const text = String(AQ.CHECK(names, [[0.02, 0.02]])[0][0]);
+    expect(text).toMatch(/^CHECK: /);
+    expect(text).toContain(`Supersaturated in calcium citrate tetrahydrate (saturation index +${si.toFixed(2)}`);
+  });
+
+  test("a dilute calcium citrate solution is undersaturated and AQ.CHECK says nothing of a solid", () => {
+    const eq = solved([["calcium chloride dihydrate", 0.0005], ["trisodium citrate dihydrate", 0.0005]]);
+    expect(eq.saturation!.find((x) => x.name === "calcium citrate tetrahydrate")!.saturationIndex).toBeLessThan(0);
+    expect(String(AQ.CHECK([["calcium chloride dihydrate", "trisodium citrate dihydrate"]], [[0.0005, 0.0005]])[0][0])).not.toMatch(/Supersaturated/);
   });
 });
