@@ -5,9 +5,10 @@
  * provenance view are another helper's work in this round; these numbers have the same shape of
  * provenance (source, locator, status) so that moving them into src/library later is mechanical.
  *
- * Status words (as in docs/references.md): "tabulated" — the value as tabulated in a named
+ * Status words (as in docs/references.md): "published" — seen in the primary publication (for the
+ * phosphate–chloride mixing terms, its abstract); "tabulated" — the value as tabulated in a named
  * open-source compilation that cites the primary source (the primary table itself was not seen
- * here); "memory" — from memory, unverified. None of these values was read in the primary paper.
+ * here); "memory" — from memory, unverified.
  *
  * Conventions (Pitzer, Activity Coefficients in Electrolyte Solutions, 2nd ed., CRC 1991, ch. 3):
  * binary parameters β0, β1 (α1 = 2.0 (kg/mol)^½), β2 (α2 = 12, used by no pair here), and Cφ; Pitzer
@@ -17,7 +18,7 @@
  * convention of the source compilations); the unsymmetrical-mixing term Eθ is always computed.
  */
 
-export type ParameterStatus = "tabulated" | "memory";
+export type ParameterStatus = "published" | "tabulated" | "memory";
 
 export interface Provenance {
   source: string;
@@ -49,6 +50,8 @@ const PM73_VIII =
 const HMW84 =
   "Harvie, Møller & Weare, Geochim. Cosmochim. Acta 48, 723 (1984), Tables 1–2, as tabulated in the pytzer compilation (pytzer/parameters.py, *_HMW84); primary tables not seen";
 const HMW84_MEMORY = "Harvie, Møller & Weare, Geochim. Cosmochim. Acta 48, 723 (1984), Table 2";
+const HFM89 =
+  "Hershey, Fernandez & Millero, \"The dissociation of phosphoric acid in NaCl and NaMgCl solutions at 25 °C\", J. Solution Chem. 18, 875 (1989), abstract (fitted to pK1*, pK2*, pK3* measured in 0.5–6 m NaCl)";
 
 const t = (cation: string, anion: string, beta0: number, beta1: number, cphi: number, source: string): BinaryParameters => ({
   cation,
@@ -131,6 +134,8 @@ export const THETA: readonly MixingParameter[] = [
   th("CO3-2", "SO4-2", 0.02, HMW84),
   th("CO3-2", "OH-", 0.1, HMW84),
   th("CO3-2", "HCO3-", -0.04, HMW84),
+  th("Cl-", "HPO4-2", 0.105, HFM89, "published"),
+  th("Cl-", "PO4-3", -0.59, HFM89, "published"),
 ];
 
 /** ψ of triplets (Harvie, Møller & Weare 1984, Table 2). Absent triplets: ψ = 0. */
@@ -158,6 +163,9 @@ export const PSI: readonly MixingParameter[] = [
   ps("K+", "CO3-2", "OH-", -0.01, HMW84),
   ps("Na+", "CO3-2", "HCO3-", 0.002, HMW84),
   ps("K+", "CO3-2", "HCO3-", 0.012, HMW84),
+  // Hershey et al. (1989) also give ψ = 0.110 labelled "PO4NaClH", whose ions the abstract leaves unclear: not used.
+  ps("Na+", "Cl-", "H2PO4-", -0.028, HFM89, "published"),
+  ps("Na+", "Cl-", "HPO4-2", -0.003, HFM89, "published"),
 ];
 
 /**
