@@ -140,7 +140,12 @@ describe("values as read in their published sources (the source and place are in
     ["mops", 0, 7.184, "roy-mops"],
     ["bicine", 0, 8.333, "roy-2006-bicine"],
     ["benzoate", 0, 4.21, "nbs-benzoic-ethanol"],
-    ["acetate", 0, 4.756, "averill-eldredge-appendix-c"],
+    ["acetate", 0, 4.756, "harris-appendix-g"],
+    ["ammonia", 0, 9.245, "harris-appendix-g"],
+    ["ethanolamine", 0, 9.498, "harris-appendix-g"],
+    ["arginine", 0, 1.823, "harris-appendix-g"],
+    ["arginine", 1, 8.991, "harris-appendix-g"],
+    ["arginine", 2, 12.48, "libretexts-e5"], // bracketed there as less reliable
     ["sulfate", 1, 1.99, "averill-eldredge-appendix-c"],
     ["tartrate", 0, 3.0, "tartaric-naclo4-1994"], // log β2 − log β1 = 7.36 − 4.36
     ["tartrate", 1, 4.36, "tartaric-naclo4-1994"],
