@@ -11,6 +11,7 @@ import { parseCsvText, toCellContent } from "./csv";
 import type { Workbook } from "./evaluate";
 import { checkCellCount, checkSheetSize, LimitError, LIMITS } from "./limits";
 import { readAddinSettings, workbookLibraryText } from "./workbook-library";
+import { longestText, textPartKind } from "./xlsx-text-limit";
 import { listZip, readZipEntry } from "./zip";
 
 export class InputError extends Error {}
@@ -100,10 +101,17 @@ function checkPackage(buffer: Buffer, file: string) {
     throw new LimitError(`'${file}' unpacks to ${(declared / 2 ** 20).toFixed(0)} MB; at most ${LIMITS.unpackedBytes / 2 ** 20} MB are read`);
   }
   for (const entry of entries) {
+    let bytes: Buffer;
     try {
-      readZipEntry(buffer, entry);
+      bytes = readZipEntry(buffer, entry);
     } catch (e) {
       throw new InputError(`'${file}' is not a readable XLSX workbook: part ${entry.name}: ${(e as Error).message}`);
+    }
+    // Cell text beyond the limit is refused before the workbook is loaded (xlsx-text-limit.ts).
+    const kind = textPartKind(entry.name);
+    const longest = kind === null ? 0 : longestText(bytes, kind === "shared");
+    if (longest > LIMITS.cellChars) {
+      throw new LimitError(`'${file}' holds a text of at least ${longest} characters (${entry.name}); a cell holds at most ${LIMITS.cellChars}`);
     }
   }
   return entries;

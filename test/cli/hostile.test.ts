@@ -50,6 +50,16 @@ describe("limits, checked before the work", () => {
     expectOneLine(run(["sheet", f]), /row 1 column 2 holds 32768 characters/);
   });
 
+  test("an XLSX cell longer than 32 767 characters is refused from the package, before the workbook is loaded", async () => {
+    const long = await workbookBuffer({ S: [["x".repeat(LIMITS.cellChars + 1)]] });
+    expectOneLine(run(["sheet", file("long-cell.xlsx", long)]), /holds a text of at least 32768 characters \(xl\/sharedStrings\.xml\); a cell holds at most 32767/);
+    // At the limit, written with entities (each '&' is '&amp;' in the XML): read, not refused.
+    const full = await workbookBuffer({ S: [["&".repeat(LIMITS.cellChars)]] });
+    const r = run(["sheet", file("full-cell.xlsx", full), "--json"]);
+    expect(r.code).toBe(0);
+    expect((JSON.parse(r.out) as { values: string[][] }[])[0]!.values[0]![0]).toHaveLength(LIMITS.cellChars);
+  });
+
   test("a file larger than the byte limit is refused by its size, before it is read", () => {
     const f = join(dir, "huge.csv");
     writeFileSync(f, Buffer.alloc(LIMITS.fileBytes + 1, 0x61));
