@@ -66,8 +66,11 @@ function checkSheets(sheets: Workbook): void {
     rows.forEach((row, r) => {
       columns = Math.max(columns, row?.length ?? 0);
       (row ?? []).forEach((cell, c) => {
-        if (typeof cell === "string" && cell.length > LIMITS.cellChars) {
-          throw new LimitError(`sheet '${name}' row ${r + 1} column ${c + 1} holds ${cell.length} characters; a cell holds at most ${LIMITS.cellChars}`);
+        if (typeof cell !== "string") return;
+        // A leading apostrophe is the engine's "text follows" mark (xlsx.ts, csv.ts), not the cell's text.
+        const length = cell[0] === "'" ? cell.length - 1 : cell.length;
+        if (length > LIMITS.cellChars) {
+          throw new LimitError(`sheet '${name}' row ${r + 1} column ${c + 1} holds ${length} characters; a cell holds at most ${LIMITS.cellChars}`);
         }
       });
     });
