@@ -2,9 +2,10 @@
  * The "try it" calculation: names and amounts → pH, through the library in effect and the same
  * engine the spreadsheet functions use (src/chem), so an entry added in the pane is seen at work.
  */
-import { parseQuantity, readTemperature, solveEquilibrium, DEFAULTS } from "../chem";
-import type { ActivityModel, Mixture, Regime } from "../chem";
+import { assessBuffering, parseQuantity, readTemperature, solveEquilibrium, DEFAULTS } from "../chem";
+import type { AcidBaseSystem, ActivityModel, BufferAssessment, BufferVerdict, Mixture, Regime } from "../chem";
 import type { Library, LayerName } from "../library";
+import { appliedConstants, type AppliedSystem } from "./applied";
 
 export interface TryRow {
   name: string;
@@ -30,6 +31,10 @@ export type TryResult =
       warnings: string[];
       /** Which library entry each row used. */
       used: UsedEntry[];
+      /** The acid–base systems and the values applied, with layer and provenance. */
+      applied: AppliedSystem[];
+      /** AQ.CHECK's buffer rule (src/chem/buffering.ts). */
+      buffering: BufferAssessment;
     }
   | { ok: false; issues: TryIssue[] };
 
@@ -39,6 +44,20 @@ export const REGIME_TEXT: Record<Regime, string> = {
   "excess-strong-base": "excess strong base: no longer a buffer",
   "no-buffer": "no buffering system",
 };
+
+/** Words for the buffer verdict of AQ.CHECK's rule (a plain weak acid is not "buffered"). */
+export function bufferingText(a: BufferAssessment): string {
+  const near = a.nearest ? ` (pH within ±1 of pKa′ ${a.nearest.pKa.toFixed(2)} of ${a.nearest.system})` : "";
+  const words: Record<BufferVerdict, string> = {
+    buffer: `buffered${near}`,
+    weak: "weakly buffered (pH 1–2 units from the nearest pKa′)",
+    "not-buffered": "not buffered (the free H⁺ or OH⁻ carries most of the buffer value, or the pH is far from every pKa′)",
+    "no-system": "no buffering system",
+    "excess-strong-acid": REGIME_TEXT["excess-strong-acid"],
+    "excess-strong-base": REGIME_TEXT["excess-strong-base"],
+  };
+  return words[a.verdict];
+}
 
 export type UsedEntry = { row: number; id: string; name: string; layer: LayerName; overrides: LayerName[] };
 
@@ -79,5 +98,8 @@ export function tryMixture(library: Library, rows: readonly TryRow[], temperatur
   const { mix, temperatureC, used } = m;
   const r = solveEquilibrium(mix, { temperatureC, activity });
   if (!r.ok) return { ok: false, issues: [{ row: -1, field: "mixture", message: r.message }] };
-  return { ok: true, pH: r.pH, pcH: r.pcH, ionicStrength: r.ionicStrength, regime: r.regime, temperatureC, warnings: r.warnings, used };
+  const systems: AcidBaseSystem[] = [];
+  for (const e of mix) for (const share of e.component.systems) if (!systems.some((x) => x.id === share.system.id)) systems.push(share.system);
+  const buffering = assessBuffering(r, systems, temperatureC, activity);
+  return { ok: true, pH: r.pH, pcH: r.pcH, ionicStrength: r.ionicStrength, regime: r.regime, temperatureC, warnings: r.warnings, used, applied: appliedConstants(library, mix, temperatureC), buffering };
 }

@@ -6,7 +6,7 @@
 import * as fs from "fs";
 import * as path from "path";
 import type { Page } from "playwright-core";
-import { convertPKa } from "../../src/library";
+import { BUILTIN_LIBRARY, convertPKa } from "../../src/library";
 import { routeOffice, ROOT } from "./support/browser";
 import { waitForText } from "./support/page-watch";
 import { NO_PROBLEMS, startPane, type PaneSession } from "./support/pane-session";
@@ -77,5 +77,35 @@ describe("issue 17, second round (pane in Chromium)", () => {
     expect(await page.locator('[data-path="steps[0].pKa.value"]').inputValue()).toBe("6.93");
     expect(await page.locator('[data-path="steps[0].pKa.measured.temperature"]').inputValue()).toBe("37");
     await page.getByRole("button", { name: "Cancel editing" }).click();
+  });
+
+  test("Try it shows the layer, the system and each pKa and ΔrH° applied with its source: a personal phosphate is seen as personal; plain acetic acid is not 'buffered'; p[H] is explained", async () => {
+    const phosphate = JSON.parse(JSON.stringify(BUILTIN_LIBRARY.systems!.find((x) => x.id === "phosphate")));
+    phosphate.steps[1].pKa = { value: 7.0, unit: "1", conditions: "25 °C, I = 0", status: "entered" };
+    const file = JSON.stringify({ format: "protolyte-library", schemaVersion: 1, name: "bench phosphate", systems: [phosphate] });
+    await tab(page, "Files");
+    await page.selectOption("#import-layer", "personal");
+    await page.setInputFiles("#import-file", { name: "bench-phosphate.json", mimeType: "application/json", buffer: Buffer.from(file) });
+    await page.click("#import-apply");
+    await waitForText(page.locator("#import-outcome"), /Imported 'bench-phosphate\.json'/);
+    await tab(page, "Try it");
+    await page.locator(".try-name").nth(0).fill("sodium dihydrogen phosphate monohydrate");
+    await page.locator(".try-amount").nth(0).fill("10 mM");
+    await page.locator(".try-name").nth(1).fill("disodium hydrogen phosphate heptahydrate");
+    await page.locator(".try-amount").nth(1).fill("10 mM");
+    await page.click("#try-run");
+    const applied = await waitForText(page.locator("#try-applied"), /phosphate — personal library \(overrides built-in\)/);
+    expect(applied).toMatch(/step 2: pKa 7 \[entered by the user\]/);
+    expect(applied).toMatch(/step 1: pKa [\d.]+ \[(?!entered)/);
+    expect(await page.locator("#try-used").innerText()).toMatch(/built-in library/); // the substances themselves are built-in
+    expect(await page.locator("#try-facts").innerText()).toMatch(/p\[H\] [\d.]+ \(−log10 of the H⁺ concentration/);
+    await page.screenshot({ path: path.join(ARTIFACTS, "qa2-try-applied-350.png"), fullPage: true });
+    await page.locator(".try-name").nth(0).fill("acetic acid");
+    await page.locator(".try-amount").nth(0).fill("0.1");
+    await page.locator(".try-name").nth(1).fill("");
+    await page.locator(".try-amount").nth(1).fill("");
+    await page.click("#try-run");
+    const verdict = await waitForText(page.locator("#try-buffering"), /buffer/);
+    expect(verdict).not.toMatch(/^buffered/);
   });
 });

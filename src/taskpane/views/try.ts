@@ -6,7 +6,8 @@
 import { el, replaceChildren, uid } from "../dom";
 import type { PaneController } from "../controller";
 import { LAYER_LABEL } from "../describe";
-import { REGIME_TEXT, type TryRow } from "../tryit";
+import { appliedHeading, appliedStepLine } from "../applied";
+import { bufferingText, type TryRow } from "../tryit";
 import { button, field, message, textInput } from "./ui";
 
 export class TryView {
@@ -96,12 +97,17 @@ export class TryView {
       return;
     }
     const used = r.used.map((u) => `${u.name} — ${LAYER_LABEL[u.layer]} library${u.overrides.length ? ` (overrides ${u.overrides.map((l) => LAYER_LABEL[l]).join(", ")})` : ""}`);
+    const applied = r.applied.map((s) =>
+      el("li", { "data-system": s.id }, el("span", { class: "applied-head" }, appliedHeading(s)), el("ul", {}, ...s.steps.map((_, k) => el("li", {}, appliedStepLine(s, k, r.temperatureC))))),
+    );
     replaceChildren(
       this.result,
       el("p", {}, "pH ", el("span", { class: "ph", id: "try-ph" }, r.pH.toFixed(2)), ` at ${r.temperatureC} °C`),
-      el("p", { class: "hint" }, `p[H] ${r.pcH.toFixed(3)} · ionic strength ${r.ionicStrength.toPrecision(3)} mol/L · ${REGIME_TEXT[r.regime]} · constants ${this.ctl.library.fingerprint()}`),
+      el("p", { class: "hint", id: "try-facts" }, `p[H] ${r.pcH.toFixed(3)} (−log10 of the H⁺ concentration in mol/L; pH is −log10 of its activity, what a meter reads) · ionic strength ${r.ionicStrength.toPrecision(3)} mol/L · `, el("span", { id: "try-buffering" }, bufferingText(r.buffering)), ` · constants ${this.ctl.library.fingerprint()}`),
       el("p", { class: "hint" }, "Entries used:"),
       el("ul", { class: "hint", id: "try-used" }, ...used.map((u) => el("li", {}, u))),
+      applied.length ? el("p", { class: "hint" }, "Constants applied (the values in effect, with their sources):") : null,
+      applied.length ? el("ul", { class: "hint", id: "try-applied" }, ...applied) : null,
       r.warnings.length ? message("warn", "Note:", r.warnings) : null,
       el("p", { class: "hint" }, "An estimate: confirm with a calibrated pH meter."),
     );
