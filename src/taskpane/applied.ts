@@ -3,7 +3,7 @@
  * in the mixture, the entry in effect (its layer and what it overrides), and each step's pKa and
  * ΔrH° with its provenance — the pKa at the result's temperature beside the 25 °C value. Pure.
  */
-import { thermodynamicPKa } from "../chem";
+import { DEFAULTS, thermodynamicPKa } from "../chem";
 import type { Mixture } from "../chem";
 import { describeProvenance, type Library, type LayerName, type SourceRecord, type SystemRecord, type ValueRecord } from "../library";
 import { convertPKa } from "../library";
@@ -51,7 +51,7 @@ export function appliedConstants(library: Library, mix: Mixture, temperatureC: n
         overrides: [...found.overrides],
         steps: r.steps.map((s, k) => {
           const step: AppliedStep = { pKa: applied(s.pKa) };
-          if (temperatureC !== 25) {
+          if (temperatureC !== DEFAULTS.temperatureC) {
             const t = thermodynamicPKa({ pKa: s.pKa.value, dH: s.dH?.value, dCp: s.dCp?.value }, temperatureC);
             if (t.ok) step.pKaAtT = t.value;
           }
@@ -82,7 +82,7 @@ export function appliedStepLine(s: AppliedSystem, k: number, temperatureC: numbe
   const n = s.steps.length > 1 ? `step ${k + 1}: ` : "";
   const atT = step.pKaAtT !== undefined ? ` (at ${temperatureC} °C, I = 0: ${step.pKaAtT.toFixed(3)})` : "";
   const pKa = `pKa ${+step.pKa.value.toFixed(4)}${atT} [${step.pKa.source}]`;
-  const dH = step.dH ? `; ΔrH° ${step.dH.value} kJ/mol [${step.dH.source}]` : temperatureC !== 25 ? "; no ΔrH°: pKa held at its 25 °C value" : "";
+  const dH = step.dH ? `; ΔrH° ${step.dH.value} kJ/mol [${step.dH.source}]` : temperatureC !== DEFAULTS.temperatureC ? "; no ΔrH°: pKa held at its 25 °C value" : "";
   const dCp = step.dCp ? `; ΔrCp° ${step.dCp.value} J/(K·mol) [${step.dCp.source}]` : "";
   const conv = step.converted ? `; ${step.converted}` : "";
   return `${n}${pKa}${dH}${dCp}${conv}`;
