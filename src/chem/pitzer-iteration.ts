@@ -83,6 +83,16 @@ export class PitzerState {
     this.lnGammaSpecies = this.speciesIon.map(() => 0);
   }
 
+  /** The fixed Na⁺ molality. */
+  sodium(): number {
+    return this.strongM[this.naIndex];
+  }
+
+  /** Sets the fixed Na⁺ molality (restores what sodium() returned). */
+  setSodium(value: number): void {
+    this.strongM[this.naIndex] = value;
+  }
+
   /** Adds delta mol/kg of Na⁺ to the fixed ions (with ChargeBalanceSolver.shiftStrongBase). */
   shiftSodium(delta: number): void {
     this.strongM[this.naIndex] += delta;
@@ -212,6 +222,10 @@ export function pitzerBufferValue(core: ChargeBalanceSolver, st: PitzerState, es
   const pHNow = () => -(core.x + core.lnGamma1) / LN10;
   const d = 1e-4 * (estimate > 0 && Number.isFinite(estimate) ? estimate : 1e-6);
   const p0 = pHNow();
+  // The exact inputs, restored by assignment afterwards (a cached mixture's next solve, which
+  // starts cold from them, is then bit-identical to a fresh one's).
+  const saved = [core.strongCharge, core.strongIonic, core.strongAbs, core.pMax, core.pMin];
+  const savedNa = st.sodium();
   const at = (shift: number): number => {
     core.shiftStrongBase(shift);
     st.shiftSodium(shift);
@@ -219,6 +233,8 @@ export function pitzerBufferValue(core: ChargeBalanceSolver, st: PitzerState, es
   };
   const p1 = at(d);
   const p2 = at(d);
-  at(-2 * d);
+  [core.strongCharge, core.strongIonic, core.strongAbs, core.pMax, core.pMin] = saved;
+  st.setSodium(savedNa);
+  solvePitzer(core, st, core.model, true);
   return (2 * d) / (-3 * p0 + 4 * p1 - p2);
 }

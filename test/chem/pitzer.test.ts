@@ -6,7 +6,7 @@
  * - the primary standards and the Sørensen phosphate table, with their own files' tolerances;
  * and identities: the Debye–Hückel limit, Gibbs–Duhem consistency of γ and φ.
  */
-import { debyeHuckelA, solveEquilibrium } from "../../src/chem";
+import { debyeHuckelA, prepare, solveEquilibrium } from "../../src/chem";
 import { osmoticSlope, PitzerModel } from "../../src/chem/activity/pitzer";
 import { osmolality } from "../../src/chem/osmolality";
 import { casesOf, type ReferenceCase } from "../reference";
@@ -182,5 +182,22 @@ describe("properties under Pitzer over random mixtures of the fixtures (seeded)"
       checked++;
     }
     expect(checked).toBeGreaterThan(250);
+  });
+});
+
+describe("a prepared mixture under Pitzer", () => {
+  test("solving it again (after a full solve with β by difference) gives bit-identical results to a fresh preparation", () => {
+    const mix = f.referenceMixture([["NaH2PO4", 0.03], ["Na2HPO4", 0.02], ["NaCl", 0.15]]);
+    const p = prepare(mix);
+    if (!p.ok) throw new Error(p.message);
+    const first = p.solve({ activity: "pitzer" });
+    const again = p.solvePH({ activity: "pitzer" });
+    const fresh = prepare(mix);
+    if (!fresh.ok || !first.ok || !again.ok) throw new Error("solve failed");
+    const cold = fresh.solvePH({ activity: "pitzer" });
+    if (!cold.ok) throw new Error(cold.message);
+    expect(again.pH).toBe(cold.pH);
+    expect(again.ionicStrength).toBe(cold.ionicStrength);
+    expect(first.pH).toBe(cold.pH);
   });
 });
