@@ -39,7 +39,7 @@ export { classifyRegime } from "./regime";
 export { parseDecimal, readDecimal, leadingDecimal } from "./number-text";
 export { assessBuffering, BUFFERING, type BufferAssessment, type BufferVerdict } from "./buffering";
 export { beyondIonicLimit, ionicLimitFailure, fmtAgainst, sideOf, IONIC_LIMIT_TEXT, THRESHOLD_ROUNDING } from "./ionic-limit";
-export { parseQuantity, writtenVolumeUnit, type QuantityDimension, type ParseOptions, type WrittenVolumeUnit } from "./units";
+export { parseQuantity, parseTemperatureTolerance, writtenVolumeUnit, type QuantityDimension, type ParseOptions, type WrittenVolumeUnit } from "./units";
 export * from "./workflows";
 export {
   ACTIVITY_MODELS,

@@ -183,3 +183,37 @@ export function writtenVolumeUnit(value: unknown): WrittenVolumeUnit {
   const symbol = isLitre ? `${f.prefix.name === "u" ? "µ" : f.prefix.name}L` : unit;
   return { symbol, litres };
 }
+
+/** "±", "+/-" or "+-" between a value and its tolerance. */
+const PLUS_MINUS = /^(.*?)\s*(?:±|\+\s*\/\s*-|\+-)\s*(.*)$/;
+
+/**
+ * A temperature written with a tolerance, "5 ± 3 °C" (also "5 °C ± 3 °C", "5 +/- 3 degC", "278.15 ±
+ * 3 K"): the range [centre − tolerance, centre + tolerance] in °C. The unit is written once at the end
+ * or on both numbers; the tolerance is a temperature difference in that unit (3 K = 3 °C, 9 °F = 5 °C).
+ * Text without "±" is not a tolerance (null): read it with parseQuantity.
+ */
+export function parseTemperatureTolerance(value: string): Result<{ centre: number; tolerance: number; range: [number, number] }> | null {
+  const m = PLUS_MINUS.exec(value.trim());
+  if (!m) return null;
+  const text = value.trim();
+  const a = leadingDecimal(m[1].trim());
+  const b = leadingDecimal(m[2].trim());
+  if (!a || !b || a.rest.trim().startsWith(",") || b.rest.trim().startsWith(",")) {
+    return fail("bad-input", `Cannot read "${text}" as a temperature with a tolerance: write for example "5 ± 3 °C".`);
+  }
+  const unitA = normaliseDegrees(a.rest.trim());
+  const unitB = normaliseDegrees(b.rest.trim());
+  if (unitA !== "" && unitB !== "" && unitA !== unitB) {
+    return fail("bad-input", `"${text}" gives the temperature and its tolerance in different units: write both in one, for example "5 ± 3 °C".`);
+  }
+  if (!(b.value >= 0)) return fail("bad-input", `The tolerance in "${text}" must be a number ≥ 0.`);
+  const unit = unitB || unitA;
+  const at = (x: number) => parseQuantity(unit === "" ? x : `${x} ${unit}`, "temperature");
+  const centre = at(a.value);
+  if (!centre.ok) return centre;
+  const upper = at(a.value + b.value);
+  if (!upper.ok) return upper;
+  const tolerance = upper.value - centre.value;
+  return { ok: true, centre: centre.value, tolerance, range: [centre.value - tolerance, centre.value + tolerance] };
+}

@@ -273,9 +273,9 @@ export function CURVE(
  * @param amounts Nominal concentrations, mol/L (or unit text), same shape as names.
  * @param amount_tolerance Relative tolerance on every amount (0.02 for ±2 %), or a range of tolerances of the same shape as names.
  * @param [pKa_uncertainty] ± uncertainty applied to every pKa, pH units. Default 0.
- * @param [temperature] Temperature, °C (0–100), default 25; or two cells for a range (2 and 8 for storage at 2–8 °C), searched as part of the worst case.
+ * @param [temperature] Temperature, °C (0–100), default 25; or a range searched as part of the worst case: two cells (2 and 8 for storage at 2–8 °C) or a tolerance as text ("5 ± 3 °C").
  * @param [activity] Activity model: "davies" (default), "ideal", "debye-huckel" or "pitzer".
- * @returns A table with a header row: low pH, high pH, method (an exhaustive worst case over all corners, or a flagged bounded search beyond 12 varied quantities).
+ * @returns A table with a header row: low pH, high pH, method (an exhaustive worst case over all corners, or a flagged bounded search beyond 12 varied quantities); beside it the statistical band pH₀ ± k·u (GUM linear propagation, k = 2) with its method.
  */
 export function PHRANGE(names: any[][], amounts: any[][], amount_tolerance: any, pKa_uncertainty?: any, temperature?: any, activity?: string): any[][] {
   return guard(() => phRange(names, amounts, amount_tolerance, pKa_uncertainty, temperature, activity));
