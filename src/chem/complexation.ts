@@ -27,10 +27,48 @@ export interface ComplexSetup {
   complexes: ActiveComplex[];
 }
 
+/** What a system's complexes need: the metal ids they name, and whether any has no metal. */
+interface Needs {
+  metals: string[];
+  ligandOnly: boolean;
+}
+
+/** Needs of frozen complex lists (the library's), computed once: preparing a mixture stays cheap. */
+const needsCache = new WeakMap<readonly ComplexSpecies[], Needs>();
+
+function needsOf(list: readonly ComplexSpecies[]): Needs {
+  let n = needsCache.get(list);
+  if (n !== undefined) return n;
+  n = { metals: [], ligandOnly: false };
+  for (const c of list) {
+    if (c.metal === undefined) n.ligandOnly = true;
+    else if (!n.metals.includes(c.metal)) n.metals.push(c.metal);
+  }
+  if (Object.isFrozen(list)) needsCache.set(list, n);
+  return n;
+}
+
+/** Index of the strong ion with this id and a total above 0, or −1. */
+function ionIndex(agg: Aggregate, id: string): number {
+  for (let i = 0; i < agg.ions.length; i++) if (agg.ions[i].ion.id === id) return agg.ions[i].conc > 0 ? i : -1;
+  return -1;
+}
+
+/** True when some complex of the list can form with the mixture's ions. */
+function canForm(agg: Aggregate, list: readonly ComplexSpecies[]): boolean {
+  const needs = needsOf(list);
+  if (needs.ligandOnly) return true;
+  for (let k = 0; k < needs.metals.length; k++) if (ionIndex(agg, needs.metals[k]) >= 0) return true;
+  return false;
+}
+
 /** The complexes that take part in an aggregated mixture, or null when there are none. */
 export function complexSetup(agg: Aggregate): ComplexSetup | null {
   let any = false;
-  for (const sys of agg.systems) if (sys.complexes !== undefined && sys.complexes.length > 0) any = true;
+  for (let s = 0; s < agg.systems.length; s++) {
+    const list = agg.systems[s].complexes;
+    if (list !== undefined && list.length > 0 && agg.totals[s] > 0 && canForm(agg, list)) any = true;
+  }
   if (!any) return null;
   const ligands: number[] = [];
   const metals: number[] = [];
@@ -42,8 +80,8 @@ export function complexSetup(agg: Aggregate): ComplexSetup | null {
     for (const spec of list) {
       let metal = -1;
       if (spec.metal !== undefined) {
-        const i = agg.ions.findIndex((x) => x.ion.id === spec.metal);
-        if (i < 0 || !(agg.ions[i].conc > 0)) continue;
+        const i = ionIndex(agg, spec.metal);
+        if (i < 0) continue;
         metal = metals.indexOf(i);
         if (metal < 0) metal = metals.push(i) - 1;
       }
@@ -54,10 +92,13 @@ export function complexSetup(agg: Aggregate): ComplexSetup | null {
   return complexes.length > 0 ? { ligands, metals, complexes } : null;
 }
 
+/** Complex lists already found valid (frozen ones only: a mutable list is checked every time). */
+const validLists = new WeakSet<readonly ComplexSpecies[]>();
+
 /** What is wrong with a system's complexes (a sentence), or null. */
 export function complexProblem(sys: AcidBaseSystem): string | null {
   const list = sys.complexes;
-  if (list === undefined) return null;
+  if (list === undefined || validLists.has(list)) return null;
   if (!Array.isArray(list)) return "its complexes are not a list.";
   for (const c of list) {
     const name = typeof c?.name === "string" ? c.name : "a complex";
@@ -69,6 +110,7 @@ export function complexProblem(sys: AcidBaseSystem): string | null {
     if (typeof c.logBeta !== "number" || !Number.isFinite(c.logBeta) || Math.abs(c.logBeta) > 200) return `complex ${name} needs a finite log β within ±200.`;
     if (c.dH !== undefined && !Number.isFinite(c.dH)) return `complex ${name}: ΔrH° is not a finite number.`;
   }
+  if (Object.isFrozen(list) && list.every((c) => Object.isFrozen(c))) validLists.add(list);
   return null;
 }
 
