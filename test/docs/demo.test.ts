@@ -107,6 +107,27 @@ describe.each([
     for (let r = grid + 1; r <= grid + 3; r++) for (let c = 3; c <= 5; c++) expect(numberAt(result, r, c)).toBeGreaterThan(5);
   });
 
+  test("section 17: TD-3 made with 37 % HCl as supplied reads its target fed back; grams over mL is the reagent's density; the band at 5 ± 3 °C holds it; 50 % NaOH carries section 14's NaOH", () => {
+    const { cells, result } = get();
+    // Rounded to 3 decimals in the sheet: ±0.0005.
+    expectWithin(numberAt(result, rowOf(cells, "check: pH of TD-3"), 1), 8, 0.0005, "TD-3 fed back at 5 °C");
+    const ml = numberAt(result, rowOf(cells, "37 % HCl to measure (mL"), 1);
+    const g = numberAt(result, rowOf(cells, "37 % HCl to weigh instead (g"), 1);
+    // 37 % HCl is 1.18–1.19 g/mL at 20 °C (docs/references.md, section 8); both rounded to 0.01
+    expect(g / ml).toBeGreaterThan(1.17);
+    expect(g / ml).toBeLessThan(1.2);
+    const worst = rowOf(cells, "TD-3 at 5 +/- 3 degC, worst case");
+    const gum = rowOf(cells, "TD-3 at 5 +/- 3 degC, GUM band");
+    expect(numberAt(result, worst, 1)).toBeLessThan(8);
+    expect(numberAt(result, worst, 2)).toBeGreaterThan(8);
+    expect(numberAt(result, gum, 1)).toBeGreaterThanOrEqual(numberAt(result, worst, 1));
+    expect(numberAt(result, gum, 2)).toBeLessThanOrEqual(numberAt(result, worst, 2));
+    // 50 % NaOH (about 19 mol/L) in mL against section 14's litres of 1 M NaOH: the same mol within 2 % (less dilution, rounding)
+    const mol50 = (numberAt(result, rowOf(cells, "50 % NaOH for HB-217-B07"), 1) / 1000) * 19.07;
+    const mol1 = numberAt(result, rowOf(cells, "1 M NaOH to add from the measured pH"), 1);
+    expect(Math.abs(mol50 - mol1) / mol1).toBeLessThan(0.02);
+  });
+
   test("the what-if grid written as one row-wise formula per column spills the same values", () => {
     const { cells, result } = get();
     expect(result.values[rowOf(cells, "same as the grid of section 10?")][1]).toBe("yes");
