@@ -6,6 +6,7 @@
  * Ksp is used at its 25 °C value at every temperature (no ΔrH° is carried for solids).
  */
 import type { Aggregate } from "./aggregate";
+import { DEFAULTS } from "./defaults";
 import { speciesName } from "./species-names";
 import type { Saturation, Species } from "./types";
 
@@ -35,7 +36,7 @@ export function saturationIndices(agg: Aggregate, species: readonly Species[], p
 
 /** One warning per supersaturated solid (SI > 0), for the equilibrium's warnings (AQ.CHECK prints them). */
 export function saturationWarnings(saturation: readonly Saturation[], temperatureC: number): string[] {
-  const at = temperatureC === 25 ? "" : `; its Ksp is the 25 °C value, used at ${temperatureC} °C`;
+  const at = temperatureC === DEFAULTS.temperatureC ? "" : `; its Ksp is the ${DEFAULTS.temperatureC} °C value, used at ${temperatureC} °C`;
   return saturation
     .filter((x) => x.saturationIndex > 0)
     .map((x) => `Supersaturated in ${x.name} (saturation index +${x.saturationIndex.toFixed(2)}, from its solubility product${at}): a solid may form; the result is for the clear solution, no precipitation is modelled.`);
