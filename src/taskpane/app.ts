@@ -13,6 +13,7 @@ import { setupTabs } from "./views/tabs";
 import { TryView } from "./views/try";
 import { PictureView } from "./views/picture";
 import type { SelectionExcel } from "./excel-selection";
+import { readWorkbookNames } from "./excel-workbook-uses";
 import { message } from "./views/ui";
 
 export interface AppOptions {
@@ -21,6 +22,8 @@ export interface AppOptions {
 }
 
 export function startApp(ctl: PaneController, opts: AppOptions = {}): void {
+  const excel = opts.excel ?? null;
+  if (excel) ctl.workbookNames = () => readWorkbookNames(excel);
   const statusBox = byId("status");
   const status = (node: HTMLElement): void => replaceChildren(statusBox, node);
   let showTab: (id: string) => void = () => undefined;

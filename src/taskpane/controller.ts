@@ -21,7 +21,7 @@ import {
   stampExport,
   withoutStamp,
 } from "../library";
-import type { EntryKind, LibraryDoc, SourceRecord, SubstanceRecord, SystemRecord, UserLayer } from "../library";
+import type { EntryKind, EntryRef, LibraryDoc, SourceRecord, SubstanceRecord, SystemRecord, UserLayer } from "../library";
 import { describeImport, type ImportChange, type ImportMode } from "./import-preview";
 import { duplicateDraft, editDraft, type EditDraft, type EditKind } from "./drafts";
 import { makeId } from "./entry-id";
@@ -32,6 +32,7 @@ import { clone, LAYER_DOC_NAME, SECTION, tidy } from "./layer-docs";
 import type { ActionResult } from "./pane-state";
 import { WorkbookActions } from "./workbook-actions";
 import { tryMixture, type TryResult, type TryRow } from "./tryit";
+import { entriesDoc, type WorkbookNames } from "./workbook-uses";
 
 export type { ActionResult, StoredProblem } from "./pane-state";
 export type { EditDraft, EditKind } from "./drafts";
@@ -52,6 +53,9 @@ function notSaved(issues: FieldIssue[]): ActionResult {
 }
 
 export class PaneController extends WorkbookActions {
+  /** Inside Excel: reads the names the workbook's AQ formulas use (set by the entry point); null in a browser page. */
+  workbookNames: (() => Promise<WorkbookNames>) | null = null;
+
   pendingImport: ImportPreview | null = null;
 
   private saveRecord(kind: "system" | "substance", layer: UserLayer, built: Built<SystemRecord | SubstanceRecord>, originalId: string | null, name: string, takeOverNames = false): Promise<ActionResult> {
@@ -209,6 +213,13 @@ export class PaneController extends WorkbookActions {
     const base = which === "effective" ? "protolyte-constants-in-effect" : `protolyte-${which}-library`;
     const stamped = stampExport(doc, this.library.fingerprint(), which === "effective" ? "constants in effect" : `${which} library`, now);
     return { fileName: exportFileName(base, stamped.exported!), text: exportLibraryText(stamped) };
+  }
+
+  /** A file of exactly the entries a workbook's formulas use (workbook-uses.ts), stamped like every export. */
+  exportEntries(refs: readonly EntryRef[], now: Date = new Date()): { fileName: string; text: string } | null {
+    if (refs.length === 0) return null;
+    const stamped = stampExport(entriesDoc(this.library, refs), this.library.fingerprint(), "entries the workbook uses", now);
+    return { fileName: exportFileName("protolyte-entries-the-workbook-uses", stamped.exported!), text: exportLibraryText(stamped) };
   }
 
   /** The unreadable stored text exactly as found, to keep before a reset. */

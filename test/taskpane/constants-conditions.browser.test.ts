@@ -108,4 +108,11 @@ describe("issue 17, second round (pane in Chromium)", () => {
     const verdict = await waitForText(page.locator("#try-buffering"), /buffer/);
     expect(verdict).not.toMatch(/^buffered/);
   });
+
+  test("Files: the entries the workbook's formulas use — in a browser page the reader is off and says why; nothing cut at 320 px", async () => {
+    await tab(page, "Files");
+    const read = page.locator("#uses-read");
+    expect(await read.isDisabled()).toBe(true);
+    expect(await page.locator("#workbook-section").innerText()).toMatch(/Inside Excel this reads the workbook's AQ formulas and lists the entries they use; this browser page has no workbook/);
+  });
 });

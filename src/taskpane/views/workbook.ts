@@ -3,10 +3,11 @@
  * pin (pin the constants of the names the workbook uses; where the built-in library now differs;
  * update deliberately), and the change record itself, newest first.
  */
-import { el, announce } from "../dom";
+import { el, announce, replaceChildren as replaceKids } from "../dom";
 import type { PaneController } from "../controller";
 import { KIND_LABEL } from "../describe";
-import { button, field, message, resultMessage, textArea, textInput } from "./ui";
+import { entriesUsed } from "../workbook-uses";
+import { button, download, field, message, resultMessage, textArea, textInput } from "./ui";
 
 const SHOWN_CHANGES = 50;
 
@@ -54,11 +55,35 @@ export function workbookSection(ctl: PaneController, names: () => string[], stat
         ),
       )
     : el("p", { class: "hint", id: "change-record" }, "No change to the workbook library has been recorded yet.");
+  const uses = el("div", { id: "uses-list", "aria-live": "polite" });
+  const readUses = button("Read the workbook's formulas", async () => {
+    if (!ctl.workbookNames) return;
+    replaceKids(uses, el("p", { class: "hint" }, "Reading the formulas…"));
+    try {
+      const found = await ctl.workbookNames();
+      const used = entriesUsed(ctl.library, found.names);
+      const file = ctl.exportEntries(used.refs);
+      replaceKids(
+        uses,
+        el("p", {}, `${found.formulas} AQ formula${found.formulas === 1 ? "" : "s"} name ${found.names.length} substance${found.names.length === 1 ? "" : "s"}; their results use these ${used.rows.length} entries:`),
+        el("table", { class: "uses" }, el("thead", {}, el("tr", {}, el("th", { scope: "col" }, "Entry"), el("th", { scope: "col" }, "Layer"), el("th", { scope: "col" }, "Status"))), el("tbody", {}, ...used.rows.map((r) => el("tr", { "data-kind": r.kind, "data-id": r.id }, el("td", {}, `${r.name} (${KIND_LABEL[r.kind]} ${r.id})`), el("td", {}, r.layerText), el("td", {}, r.status || "—"))))),
+        used.unknown.length ? message("warn", "Names the library does not know:", used.unknown) : null,
+        found.unread.length ? message("warn", "Not read:", found.unread.slice(0, 20)) : null,
+        file ? el("div", { class: "actions" }, button("Export exactly these entries", () => download(file.fileName, file.text), { id: "uses-export" })) : null,
+      );
+    } catch (e) {
+      replaceKids(uses, message("error", `The formulas could not be read: ${e instanceof Error ? e.message : String(e)}`));
+    }
+  }, { id: "uses-read", disabled: ctl.workbookNames === null });
   return el(
     "div",
     { id: "workbook-section" },
     el("h2", {}, "The workbook library"),
     who,
+    el("h3", {}, "Entries the workbook's formulas use"),
+    el("p", { class: "hint" }, ctl.workbookNames ? "Reads every AQ formula in the used range of each sheet, and the cells its names come from; lists each entry the results depend on with its layer and status, and exports exactly those." : "Inside Excel this reads the workbook's AQ formulas and lists the entries they use; this browser page has no workbook."),
+    el("div", { class: "actions" }, readUses),
+    uses,
     el("h3", {}, "Pin"),
     el("p", { class: "hint" }, "Pinning copies the constants these names use (their systems, ions, sources and atomic weights) into the workbook library, so that a later Protolyte with revised built-in values does not change this workbook's results."),
     field("Names the workbook uses (one per line)", pinNames, { hint: "Filled from the Try it mixture; add the names your formulas use." }).wrap,
