@@ -5,6 +5,7 @@
  * status of its values; and a library file of exactly those entries, for export. Pure.
  */
 import { dependenciesOf, LIBRARY_FORMAT, putEntry, SCHEMA_VERSION, type EntryKind, type EntryRef, type LayerName, type Library, type LibraryDoc, type SystemRecord } from "../library";
+import { readDecimal } from "../chem";
 import { entryName, LAYER_LABEL, valuesOf } from "./describe";
 
 /** What reading the workbook found: the names, the formulas read, and what could not be read. */
@@ -39,10 +40,13 @@ export interface EntriesUsed {
  */
 export function nameCandidates(text: string): string[] {
   const t = text.trim();
-  const bare = t
-    .replace(/^\s*[\d.]+\s*(m?M|mol\/L|%(\s*w\/[wv])?)\s+/i, "")
-    .replace(/\s+[\d.]+\s*(m?M|mol\/L|%(\s*w\/[wv])?)\s*$/i, "")
-    .trim();
+  let words = t.split(/\s+/);
+  const unit = (w: string | undefined): boolean => w !== undefined && /^(m?M|mol\/L|%)$/i.test(w);
+  const num = (w: string | undefined): boolean => w !== undefined && readDecimal(w) !== null;
+  if (/^w\/[wv]$/i.test(words[words.length - 1] ?? "") && words[words.length - 2] === "%") words = words.slice(0, -1);
+  if (words.length >= 3 && num(words[0]) && unit(words[1])) words = words.slice(2);
+  else if (words.length >= 3 && num(words[words.length - 2]) && unit(words[words.length - 1])) words = words.slice(0, -2);
+  const bare = words.join(" ");
   return bare !== t && bare !== "" ? [t, bare] : [t];
 }
 

@@ -32,6 +32,7 @@ describe("names in a formula", () => {
     expect(nameCandidates("NaOH 1 M")).toEqual(["NaOH 1 M", "NaOH"]);
     expect(nameCandidates("0.1 M HCl")).toEqual(["0.1 M HCl", "HCl"]);
     expect(nameCandidates("Tris base")).toEqual(["Tris base"]);
+    expect(nameCandidates("hydrochloric acid 37 % w/w")).toEqual(["hydrochloric acid 37 % w/w", "hydrochloric acid"]);
   });
 });
 
