@@ -29,7 +29,7 @@ describe("reference tables", () => {
       const where = { id: t.id };
       expect({ ...where, ok: [t.title, t.source, t.locator, t.verified, t.conditions, t.unit].every((x) => typeof x === "string" && x.length > 1) }).toEqual({ ...where, ok: true });
       expect({ ...where, status: ["V", "X"].includes(t.status) }).toEqual({ ...where, status: true });
-      expect({ ...where, quantity: ["pH", "beta", "pKw", "pKw-density", "pK", "molar-mass", "debye-huckel-A", "reagent-molarity", "mean-activity-coefficient", "osmotic-coefficient", "log-conditional-K"].includes(t.quantity) }).toEqual({ ...where, quantity: true });
+      expect({ ...where, quantity: ["pH", "beta", "pKw", "pKw-density", "pK", "molar-mass", "debye-huckel-A", "reagent-molarity", "mean-activity-coefficient", "osmotic-coefficient", "log-conditional-K", "freezing-point-depression"].includes(t.quantity) }).toEqual({ ...where, quantity: true });
       expect({ ...where, tolerance: t.tolerance.value > 0 && t.tolerance.reason.length > 20 }).toEqual({ ...where, tolerance: true });
       expect({ ...where, cases: t.cases.length > 0 }).toEqual({ ...where, cases: true });
     }
@@ -51,7 +51,7 @@ describe("reference tables", () => {
         expect({ id: c.id, finite: Number.isFinite(c.expected) }).toEqual({ id: c.id, finite: true });
         expect({ id: c.id, tolerance: c.tolerance.value > 0 && c.tolerance.reason.length > 20 }).toEqual({ id: c.id, tolerance: true });
         const needs =
-          t.quantity === "pH" || t.quantity === "beta" || t.quantity === "mean-activity-coefficient" || t.quantity === "osmotic-coefficient"
+          t.quantity === "pH" || t.quantity === "beta" || t.quantity === "mean-activity-coefficient" || t.quantity === "osmotic-coefficient" || t.quantity === "freezing-point-depression"
             ? (c.mixture?.length ?? 0) > 0 && c.mixture!.every(([n, a]) => n.length > 0 && a > 0) && c.temperatureC !== undefined
             : t.quantity === "pK"
               ? c.system !== undefined && Number.isInteger(c.step) && c.temperatureC !== undefined

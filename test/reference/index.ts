@@ -67,7 +67,7 @@ export interface ReferenceCase {
 export interface ReferenceTable {
   id: string;
   title: string;
-  quantity: "pH" | "beta" | "pKw" | "pKw-density" | "pK" | "molar-mass" | "debye-huckel-A" | "reagent-molarity" | "mean-activity-coefficient" | "osmotic-coefficient" | "log-conditional-K";
+  quantity: "pH" | "beta" | "pKw" | "pKw-density" | "pK" | "molar-mass" | "debye-huckel-A" | "reagent-molarity" | "mean-activity-coefficient" | "osmotic-coefficient" | "log-conditional-K" | "freezing-point-depression";
   unit: string;
   source: string;
   locator: string;
