@@ -164,6 +164,9 @@ export function buildSystem(input: SystemInput): Built<SystemRecord> {
   const record: SystemRecord = { id: input.id, name: input.name.trim(), topCharge: topCharge as number, steps };
   const species = lines(input.speciesNames);
   if (species.length) record.speciesNames = species;
+  // Complexes and solids are not edited in this form: the record keeps those it had.
+  if (input.complexes) record.complexes = input.complexes;
+  if (input.solids) record.solids = input.solids;
   setIf(record, "note", input.note.trim());
   return { ok: true, record, notes };
 }

@@ -4,7 +4,7 @@
  * record-to-form.ts, ids from names entry-id.ts.
  */
 import { readDecimal } from "../chem";
-import type { PhysicalState, SourceRecord, SubstanceNature, ValueRecord, ValueStatus } from "../library";
+import type { PhysicalState, SourceRecord, SubstanceNature, SystemRecord, ValueRecord, ValueStatus } from "../library";
 
 /** A problem at a field of the entry being edited: path relative to the entry ("steps[0].pKa.value"). */
 export interface FieldIssue {
@@ -51,6 +51,9 @@ export interface SystemInput {
   speciesNames: string;
   note: string;
   steps: StepInput[];
+  /** Complexes and solids of the record being edited: not editable here, carried over unchanged. */
+  complexes?: SystemRecord["complexes"];
+  solids?: SystemRecord["solids"];
 }
 
 export interface SubstanceInput {

@@ -27,6 +27,8 @@ export function systemToInput(r: SystemRecord): SystemInput {
     speciesNames: (r.speciesNames ?? []).join("\n"),
     note: r.note ?? "",
     steps: r.steps.map((s) => ({ ...pKaToInput(s.pKa), enteredAsPkb: false, dH: valueToInput(s.dH), dCp: valueToInput(s.dCp) })),
+    ...(r.complexes ? { complexes: r.complexes } : {}),
+    ...(r.solids ? { solids: r.solids } : {}),
   };
 }
 

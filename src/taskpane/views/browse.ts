@@ -125,6 +125,7 @@ export class BrowseView {
       const r = entry.record as SystemRecord;
       facts.push(["top charge", `${r.topCharge > 0 ? "+" : ""}${r.topCharge}`]);
       if (r.speciesNames) facts.push(["species", r.speciesNames.join(" → ")]);
+      if (r.complexes?.length) facts.push(["complexes", r.complexes.map((c) => c.name).join(", ")]);
     } else if (entry.kind === "source") {
       facts.push(["citation", citation(entry.record as SourceRecord, entry.id)]);
       const r = entry.record as SourceRecord;
