@@ -116,6 +116,12 @@ export function describeMeasured(system: SystemInput, i: number): string | null 
   return `Stored as pKa ${+c.value.toFixed(4)} at 25 °C, I = 0 — ${c.method}. ${c.uncertainty}`.trim();
 }
 
+/** A base entered by pKb is stored through its conjugate acid BH⁺: a top charge of 0 is almost surely a slip. */
+export function pkbChargeWarning(system: SystemInput): string | null {
+  if (!system.steps.some((s) => s.enteredAsPkb) || readNumber(system.topCharge) !== 0) return null;
+  return "Check the charge: a base entered by its pKb is stored through its conjugate acid, so a neutral base B (ammonia, Tris) has BH⁺ as its fully protonated form, charge +1. With 0 its salts will not balance.";
+}
+
 export function buildSystem(input: SystemInput): Built<SystemRecord> {
   const issues: FieldIssue[] = [];
   const notes: string[] = [];

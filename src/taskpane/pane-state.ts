@@ -7,6 +7,7 @@
  * store it → put it in effect (setLayer). If storing fails, nothing is put in effect; if the file is
  * invalid, nothing is stored.
  */
+import { layerIssueWords, once } from "./issue-words";
 import { getActiveLibrary, loadLayer, makeBlob, makeChange, referenceContext, setLayer, validateLibraryDoc, withChange } from "../library";
 import type { ChangeInput, EntryKind, Library, LibraryDoc, UserLayer, ValidationIssue } from "../library";
 import type { FieldIssue } from "./forms";
@@ -140,7 +141,7 @@ export class PaneState {
     const recorded = layer === "workbook" && change ? withChange(next, makeChange({ ...change, who: this.userName, reason: this.changeReason })) : next;
     const doc = tidy(recorded);
     const v = validateLibraryDoc(doc, this.contextFor(layer));
-    if (!v.ok) return this.invalid(v.errors, entryPath, layer);
+    if (!v.ok) return this.invalid(v.errors, entryPath, layer, doc);
     const before = new Set(this.library.problems.map((p) => `${p.layer}:${p.path}:${p.message}`));
     const store = this.stores[layer];
     const storageWarnings: string[] = [];
@@ -156,7 +157,7 @@ export class PaneState {
       storageWarnings.push(...saved.warnings);
     }
     const applied = setLayer(layer, isEmpty(doc) ? null : doc);
-    if (!applied.ok) return this.invalid(applied.errors, entryPath, layer);
+    if (!applied.ok) return this.invalid(applied.errors, entryPath, layer, doc);
     this.changeReason = "";
     this.changed();
     const warnings = [
@@ -168,16 +169,16 @@ export class PaneState {
     return { ok: true, message: done, warnings, notes };
   }
 
-  private invalid(errors: ValidationIssue[], entryPath: string | null, layer: UserLayer): ActionResult {
+  private invalid(errors: ValidationIssue[], entryPath: string | null, layer: UserLayer, doc: LibraryDoc): ActionResult {
     const issues: FieldIssue[] = [];
     const other: string[] = [];
     for (const e of errors) {
       if (entryPath !== null && (e.path === entryPath || e.path.startsWith(`${entryPath}.`) || e.path.startsWith(`${entryPath}[`))) {
         issues.push({ path: e.path.slice(entryPath.length).replace(/^\./, ""), message: e.message });
-      } else other.push(`${LAYER_DOC_NAME[layer]}, ${e.path || "(file)"}: ${e.message}`);
+      } else other.push(layerIssueWords(doc, LAYER_DOC_NAME[layer], e.path, e.message));
     }
-    const n = errors.length;
-    return { ok: false, message: `Not saved: ${n} problem${n === 1 ? "" : "s"} to fix.`, issues, other };
+    const n = issues.length + once(other).length;
+    return { ok: false, message: `Not saved: ${n} problem${n === 1 ? "" : "s"} to fix.`, issues, other: once(other) };
   }
 
   /** Is this id used by an entry of this kind anywhere in effect? */

@@ -78,3 +78,15 @@ test("at 25 °C with only an ionic strength no ΔrH° is needed; clearing the co
   expect(plain.ok && plain.record.steps[0].pKa.measured).toBeUndefined();
   expect(plain.ok && plain.record.steps[0].pKa.conditions).toBe("25 °C, I = 0");
 });
+
+test("a base entered by pKb with the charge left at 0 is warned at once; +1 is not", async () => {
+  const { pkbChargeWarning } = await import("../../src/taskpane/form-to-record");
+  const s = emptySystem();
+  s.steps[0].enteredAsPkb = true;
+  expect(pkbChargeWarning(s)).toMatch(/a neutral base B .* charge \+1/);
+  s.topCharge = "1";
+  expect(pkbChargeWarning(s)).toBeNull();
+  s.topCharge = "0";
+  s.steps[0].enteredAsPkb = false;
+  expect(pkbChargeWarning(s)).toBeNull();
+});

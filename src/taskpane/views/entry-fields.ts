@@ -5,7 +5,7 @@
  */
 import type { IonRecord, Library, SystemRecord } from "../../library";
 import { el } from "../dom";
-import { describeMeasured, describePkbConversion } from "../form-to-record";
+import { describeMeasured, describePkbConversion, pkbChargeWarning } from "../form-to-record";
 import { emptyStep, type SourceInput, type StepInput, type SubstanceInput, type SystemInput } from "../forms";
 import { button, field, select, textArea, textInput } from "./ui";
 import { idField, valueFields } from "./value-fields";
@@ -43,7 +43,11 @@ export function systemFields(ctx: FieldsContext, input: SystemInput): HTMLElemen
   return [
     field("Name", textInput(input.name, (v) => (input.name = v), { required: "" }), { path: "name" }).wrap,
     idField(input, ctx.editing),
-    field("Charge of the fully protonated form", textInput(input.topCharge, (v) => (input.topCharge = v), { inputmode: "numeric" }), {
+    field("Charge of the fully protonated form", textInput(input.topCharge, (v) => {
+      input.topCharge = v;
+      // the steps' live lines (pKb charge check, measured conversion) depend on the charge
+      ctx.form.querySelectorAll("fieldset.step").forEach((f) => f.dispatchEvent(new Event("input")));
+    }, { inputmode: "numeric" }), {
       path: "topCharge",
       hint: "0 for an acid HA or H₂A; +1 for a base stored through its conjugate acid BH⁺.",
     }).wrap,
@@ -64,7 +68,8 @@ function stepFields(ctx: FieldsContext, system: SystemInput, s: StepInput, i: nu
   const conversion = el("p", { class: "conversion", "aria-live": "polite", hidden: !s.enteredAsPkb });
   const showConversion = (): void => {
     conversion.hidden = !s.enteredAsPkb;
-    conversion.textContent = s.enteredAsPkb ? describePkbConversion(s.pKa.value) ?? "Enter the pKb at 25 °C to see the pKa stored." : "";
+    const charge = pkbChargeWarning(system);
+    conversion.textContent = s.enteredAsPkb ? `${describePkbConversion(s.pKa.value) ?? "Enter the pKb at 25 °C to see the pKa stored."}${charge ? ` ${charge}` : ""}` : "";
   };
   const pkb = el("input", { type: "checkbox", id: `${p}-pkb` }) as HTMLInputElement;
   pkb.checked = s.enteredAsPkb;
@@ -94,6 +99,7 @@ function stepFields(ctx: FieldsContext, system: SystemInput, s: StepInput, i: nu
   }) : null;
   const box = el("fieldset", { class: "step" }, el("legend", {}, `Step ${i + 1}`), pKa, thermo, remove ? el("div", { class: "actions" }, remove) : null);
   box.addEventListener("input", showMeasured);
+  box.addEventListener("input", showConversion);
   box.addEventListener("change", showMeasured);
   return box;
 }

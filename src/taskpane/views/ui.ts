@@ -1,6 +1,7 @@
 /** Small building blocks shared by the views: messages, labelled fields, downloads. All text is text. */
 import { el, uid, type Child } from "../dom";
 import type { ActionResult } from "../controller";
+import { fieldWords, once } from "../issue-words";
 
 export type Tone = "ok" | "error" | "warn";
 
@@ -17,7 +18,7 @@ export function resultMessage(r: ActionResult): HTMLElement {
     const items = [...r.notes, ...r.warnings];
     return message(r.warnings.length ? "warn" : "ok", r.message, items);
   }
-  return message("error", r.message, [...r.issues.map((i) => `${i.path || "entry"}: ${i.message}`), ...r.other]);
+  return message("error", r.message, once([...r.issues.map((i) => `${fieldWords(i.path)}: ${i.message}`), ...r.other]));
 }
 
 export interface FieldParts {
