@@ -115,4 +115,14 @@ describe("issue 17, second round (pane in Chromium)", () => {
     expect(await read.isDisabled()).toBe(true);
     expect(await page.locator("#workbook-section").innerText()).toMatch(/Inside Excel this reads the workbook's AQ formulas and lists the entries they use; this browser page has no workbook/);
   });
+
+  test.each([350, 320])("the tabs fit on one row at %i px, none cut", async (width) => {
+    await page.setViewportSize({ width, height: 900 });
+    const boxes = await page.locator("[role=tab]").evaluateAll((tabs) => tabs.map((t) => { const r = t.getBoundingClientRect(); return { top: Math.round(r.top), right: r.right, cut: t.scrollWidth > t.clientWidth + 1 }; }));
+    const list = await page.locator("[role=tablist]").evaluate((l) => ({ right: l.getBoundingClientRect().right, scroll: l.scrollWidth > l.clientWidth + 1 }));
+    expect(new Set(boxes.map((b) => b.top)).size).toBe(1);
+    expect(boxes.filter((b) => b.cut)).toEqual([]);
+    expect(list.scroll).toBe(false); // all six visible without scrolling
+    await page.screenshot({ path: path.join(ARTIFACTS, `qa2-tabs-${width}.png`), clip: { x: 0, y: 0, width, height: 260 } });
+  });
 });

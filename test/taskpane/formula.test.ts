@@ -5,6 +5,7 @@
  * positions are checked against the functions' own catalogue.
  */
 import { CATALOGUE } from "../../src/functions/catalogue";
+import { activityModelChoices } from "../../src/chem/activity/models";
 import { getActiveLibrary, resetActiveLibrary } from "../../src/library";
 import { pictureOf } from "../../src/taskpane/charts/picture";
 import { aqFunctionId, findAqCall, MIXTURE_FUNCTIONS, type AqCall, type ArgSource } from "../../src/taskpane/formula/aq-call";
@@ -205,7 +206,7 @@ describe("values → the pane's rows", () => {
     expect(mixtureFromValues([["a"], ["b"]], [[1], [{ error: "#REF!" }]])).toEqual({ ok: false, message: "a name or amount cell (item 2) shows #REF!" });
     expect(mixtureFromValues([[""]], [[""]])).toEqual({ ok: false, message: "the mixture is empty: give at least one substance name with its amount" });
     expect(mixtureFromValues([["a"]], [[1]], [[25, 30]])).toEqual({ ok: false, message: "the temperature must be one cell, not 1×2 cells" });
-    expect(mixtureFromValues([["a"]], [[1]], null, [["fancy"]])).toEqual({ ok: false, message: 'The activity model "fancy" is not known: use "davies", "ideal" or "debye-huckel".' });
+    expect(mixtureFromValues([["a"]], [[1]], null, [["fancy"]])).toEqual({ ok: false, message: `The activity model "fancy" is not known: use ${activityModelChoices()}.` });
     expect(mixtureFromValues([["a"]], [[true]])).toEqual({ ok: false, message: "a name or amount is TRUE/FALSE" });
   });
 

@@ -165,8 +165,10 @@ describe("task pane in Chromium with office.js from the npm copy", () => {
     await page.click("#editor-save");
     const summary = await page.locator("#editor-errors").innerText();
     expect(summary).toMatch(/Not saved: 2 problems/);
-    expect(summary).toMatch(/topCharge: a whole number/);
-    expect(summary).toMatch(/steps\[0\]\.pKa\.value: 'abc' is not a number/);
+    // fields named in words, not paths (issue 17 item 9)
+    expect(summary).toMatch(/charge of the fully protonated form: a whole number/);
+    expect(summary).toMatch(/step 1, pKa: 'abc' is not a number/);
+    expect(summary).not.toMatch(/steps\[0\]|topCharge/);
     expect(await attr(page.locator('[data-path="steps[0].pKa.value"]'), "aria-invalid")).toBe("true");
     expect(await focused(page.locator("#editor-errors"))).toBe(true);
     expect(await page.locator("#fingerprint").innerText()).toBe(before);
