@@ -125,4 +125,14 @@ describe("issue 17, second round (pane in Chromium)", () => {
     expect(list.scroll).toBe(false); // all six visible without scrolling
     await page.screenshot({ path: path.join(ARTIFACTS, `qa2-tabs-${width}.png`), clip: { x: 0, y: 0, width, height: 260 } });
   });
+
+  test("species and formulas in Browse are written with subscripts and superscripts, as the charts write them", async () => {
+    await page.setViewportSize({ width: 350, height: 900 });
+    const sys = await open(page, "system", "phosphate", "phosphate");
+    expect(await sys.innerText()).toContain("H₃PO₄ → H₂PO₄⁻ → HPO₄²⁻ → PO₄³⁻");
+    const salt = await open(page, "substance", "disodium-hydrogen-phosphate-heptahydrate", "disodium hydrogen phosphate heptahydrate");
+    const text = await salt.innerText();
+    expect(text).toContain("Na₂HPO₄·7H₂O");
+    expect(text).toContain("2 × Na⁺");
+  });
 });

@@ -5,6 +5,7 @@
 import type { EntryKind, IonRecord, LayerName, MergedEntry, SourceRecord, SubstanceRecord, SystemRecord } from "../../library";
 import { el, replaceChildren, uid, announce } from "../dom";
 import type { PaneController, EditDraft } from "../controller";
+import { displayName } from "../charts/palette";
 import { citation, entryName, entrySummary, filterEntries, KIND_LABEL, LAYER_LABEL, overrideText, valuesOf } from "../describe";
 import { button, resultMessage, select } from "./ui";
 
@@ -111,20 +112,20 @@ export class BrowseView {
     if (entry.kind === "substance") {
       const r = entry.record as SubstanceRecord;
       if (r.aliases?.length) facts.push(["also called", r.aliases.join("; ")]);
-      if (r.formula) facts.push(["formula", `${r.formula}${r.formulaAlias === false ? " (not a lookup name)" : ""}`]);
+      if (r.formula) facts.push(["formula", `${displayName(r.formula)}${r.formulaAlias === false ? " (not a lookup name)" : ""}`]);
       const resolved = this.ctl.library.resolve(entry.id);
       if (resolved.ok && resolved.component.molarMass !== undefined && !r.molarMass) facts.push(["molar mass", `${resolved.component.molarMass.toFixed(3)} g/mol (from the formula)`]);
       if (!resolved.ok) facts.push(["cannot be used", resolved.message]);
       facts.push(["kind", r.nature.replace(/-/g, " ")]);
       for (const s of r.systems ?? []) facts.push(["system", `${s.stoich} × ${this.ctl.library.get(s.system, "system") ? (this.ctl.library.get(s.system, "system")!.record as SystemRecord).name : s.system}, carrying ${s.protons} dissociable H⁺`]);
-      for (const s of r.ions ?? []) facts.push(["ion", `${s.stoich} × ${(this.ctl.library.get(s.ion, "ion")?.record as IonRecord | undefined)?.formula ?? s.ion}`]);
+      for (const s of r.ions ?? []) facts.push(["ion", `${s.stoich} × ${displayName((this.ctl.library.get(s.ion, "ion")?.record as IonRecord | undefined)?.formula ?? s.ion)}`]);
       if (r.neutral) facts.push(["neutral particles", String(r.neutral)]);
       if (r.freeH) facts.push(["H⁺ released", String(r.freeH)]);
       if (r.freeOH) facts.push(["OH⁻ released", String(r.freeOH)]);
     } else if (entry.kind === "system") {
       const r = entry.record as SystemRecord;
       facts.push(["top charge", `${r.topCharge > 0 ? "+" : ""}${r.topCharge}`]);
-      if (r.speciesNames) facts.push(["species", r.speciesNames.join(" → ")]);
+      if (r.speciesNames) facts.push(["species", r.speciesNames.map(displayName).join(" → ")]);
       if (r.complexes?.length) facts.push(["complexes", r.complexes.map((c) => c.name).join(", ")]);
     } else if (entry.kind === "source") {
       facts.push(["citation", citation(entry.record as SourceRecord, entry.id)]);
