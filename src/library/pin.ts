@@ -36,6 +36,15 @@ export function dependenciesOf(library: Library, substanceId: string): EntryRef[
     refs.push({ kind: "system", id: share.system });
     const sys = library.get(share.system, "system")?.record as SystemRecord | undefined;
     for (const step of sys?.steps ?? []) cited.push(...sourcesOf([step.pKa, step.dH, step.dCp]));
+    // complexes and solids name metal ions and cite their constants' sources
+    for (const c of sys?.complexes ?? []) {
+      if (c.metal) refs.push({ kind: "ion", id: c.metal });
+      cited.push(...sourcesOf([c.logBeta, c.dH]));
+    }
+    for (const sol of sys?.solids ?? []) {
+      refs.push({ kind: "ion", id: sol.metal });
+      cited.push(...sourcesOf([sol.logKsp]));
+    }
   }
   for (const share of s.ions ?? []) refs.push({ kind: "ion", id: share.ion });
   if (s.formula) {

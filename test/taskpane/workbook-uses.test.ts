@@ -118,7 +118,7 @@ describe("the entries they use, with layer and status, and their export", () => 
     const used = entriesUsed(ctl.library, ["sodium acetate"]);
     const file = ctl.exportEntries(used.refs, new Date("2026-12-03T01:00:00Z"))!;
     expect(file.fileName).toMatch(/^protolyte-entries-the-workbook-uses_PL-[\d.]+-[0-9a-f]{10}_2026-12-03T0100Z\.json$/);
-    const parsed = parseLibraryText(file.text, [BUILTIN_LIBRARY]); // as an import into a layer reads it
+    const parsed = parseLibraryText(file.text); // complete on its own: complexes' metal ions and sources included
     if (!parsed.ok) throw new Error(`${parsed.message} ${JSON.stringify((parsed as { errors?: unknown }).errors ?? "").slice(0, 300)}`);
     expect(parsed.library.exported?.what).toBe("entries the workbook uses");
     const inFile = [
