@@ -16,6 +16,17 @@
  * β0 = β1 = Cφ = 0, and an absent θ or ψ is 0. Both are reported as warnings (AQ.CHECK shows them)
  * when the ions concerned are present at ≥ 1 mM and ≥ 1 % of I.
  *
+ * pH convention: single-ion γ are not measurable; only neutral combinations (γH·γCl, the ratios in
+ * every Ka and in Kw) are, and those are what Pitzer's equations are fitted to. A meter calibrated
+ * with the pH(S) standards reads on the scale those standards were assigned on, where ln γ(Cl⁻) is
+ * fixed by the Bates–Guggenheim convention, log10 γCl = −A√I/(1 + 1.5√I) (Bates & Guggenheim, Pure
+ * Appl. Chem. 1, 163 (1960); Buck et al., Pure Appl. Chem. 74, 2169 (2002), the pH(S) assignment).
+ * So each Pitzer ion's ln γ is moved by z·k with k = ln γCl(Pitzer) − ln γCl(Bates–Guggenheim), Cl⁻
+ * taken as a trace ion when the mixture holds none. The neutral combinations, and with them the
+ * speciation, are unchanged; the reported pH is then on the meter's scale (it moves by −k/ln 10,
+ * +0.002 to +0.03 in the phosphate tables at I = 0.1–0.3). The fallback ions keep Davies γ, itself
+ * a conventional single-ion value of the same Debye–Hückel shape.
+ *
  * Concentrations in mol/L are used as molalities, as everywhere in the engine (README, Model): at
  * 1 mol/L NaCl the molality is about 2 % higher, which moves ln γ± by under 0.005.
  */
@@ -31,6 +42,12 @@ import { ION_SPECIFIC_START } from "./activity/models";
 import type { ActivityModel } from "./types";
 
 const X_TOLERANCE = 1e-12;
+
+/** ln γ(Cl⁻) by the Bates–Guggenheim convention: log10 γ = −A√I/(1 + 1.5√I) (Bates & Guggenheim 1960). */
+function batesGuggenheimLnGammaCl(I: number, A: number): number {
+  const s = Math.sqrt(I);
+  return (-LN10 * A * s) / (1 + 1.5 * s);
+}
 const MAX_PASSES = 200;
 
 /** The ions of one prepared mixture, compiled once: H⁺, OH⁻, Na⁺ (for β), strong ions, charged system species. */
@@ -46,6 +63,8 @@ export class PitzerState {
   readonly lnGamma: number[];
   readonly lnGammaSpecies: number[];
   private readonly naIndex: number;
+  /** Cl⁻ is always one of the ions (a trace ion when absent): the pH convention reads its γ. */
+  private readonly clIndex: number;
   /** Σ m_i(φ − 1) over the ions at the last evaluation, and its ionic strength. */
   osmoticExcess = 0;
   ionicStrength = 0;
@@ -67,6 +86,7 @@ export class PitzerState {
     add("H+", 1);
     add("OH-", -1);
     this.naIndex = add("Na+", 1);
+    this.clIndex = add("Cl-", -1);
     for (const { ion, conc } of agg.ions) {
       if (ion.charge === 0) continue;
       this.strongM[add(strongIonName(ion.id), ion.charge)] += conc;
@@ -137,7 +157,12 @@ export class PitzerState {
     this.osmoticExcess = this.model.evaluate(this.m, osmoticSlope(A), lnG);
     const I = this.model.ionicStrength;
     this.ionicStrength = I;
-    for (let i = 0; i < lnG.length; i++) if (this.fallback[i]) lnG[i] = LN10 * daviesLog10Gamma(this.charges[i], I, A);
+    // The pH convention (module comment): every Pitzer ion's ln γ moves by z·k, k chosen so that
+    // ln γ(Cl⁻) takes its Bates–Guggenheim value; the fallback ions keep their Davies γ.
+    const k = lnG[this.clIndex] - batesGuggenheimLnGammaCl(I, A);
+    for (let i = 0; i < lnG.length; i++) {
+      lnG[i] = this.fallback[i] ? LN10 * daviesLog10Gamma(this.charges[i], I, A) : lnG[i] + this.charges[i] * k;
+    }
     for (let j = 0; j < this.speciesIon.length; j++) {
       const i = this.speciesIon[j];
       this.lnGammaSpecies[j] = i >= 0 ? lnG[i] : 0;

@@ -90,20 +90,24 @@ describe("McIlvaine citrate–phosphate series, Pitzer (test/reference/mcilvaine
   });
 });
 
-describe("Sørensen phosphate table, Pitzer (test/reference/sorensen-phosphate.json, its ±0.05)", () => {
+describe("Sørensen phosphate table, Pitzer (test/reference/sorensen-phosphate.json), within issue 20's 0.03", () => {
+  // The file's ±0.05 is the tolerance for every model; issue 20 sets 0.03 for this model on the
+  // phosphate tables. Before the Bates–Guggenheim pH scale (pitzer-iteration.ts) the model read up
+  // to 0.040 below the table at I = 0.2–0.3; on that scale it reads within 0.023.
   test.each(casesOf("sorensen-phosphate"))("$id: pH $printed", (c) => {
-    f.expectReference(pitzerPH(c), c, `${c.label}, Pitzer`);
+    f.expectAbs(pitzerPH(c), c.expected!, 0.03, `${c.label}, Pitzer`);
   });
 });
 
 describe("primary standards under Pitzer (test/reference/ph-standards.json)", () => {
-  // The phosphate standards move by under 0.01 from Davies and sit closer to pH(S); the KH₂ citrate
-  // (analogue rule) and carbonate standards move by 0.013–0.014 and end 0.021–0.022 below pH(S):
-  // the file's ±0.02 is widened to ±0.025 here for that reason, and the shift from Davies is bounded.
+  // Issue 20: the standards unchanged within 0.01 from the default model. On the Bates–Guggenheim
+  // scale every standard stays within 0.007 of Davies; the equimolal and 1:3.5 phosphate standards
+  // read 0.014–0.015 above pH(S) at 25 °C and 0.022 at 38 °C (Davies: 0.011 and 0.015), so the
+  // file's ±0.02 is widened to ±0.025 here for that reason.
   test.each(casesOf("ph-standards"))("$id: $label at $temperatureC °C, pH(S) $printed", (c) => {
     const p = pitzerPH(c);
     f.expectAbs(p, c.expected!, 0.025, `${c.label}, Pitzer`);
-    f.expectAbs(p, daviesPH(c), 0.015, `${c.label}, Pitzer against Davies`);
+    f.expectAbs(p, daviesPH(c), 0.01, `${c.label}, Pitzer against Davies`);
   });
 });
 
@@ -114,6 +118,21 @@ describe("the solve under Pitzer", () => {
     if (!r.ok) throw new Error(r.message);
     expect(r.warnings.join(" ")).toMatch(/TrisH\+.*Davies/);
     expect(r.warnings.join(" ")).toMatch(/25 °C values/);
+  });
+
+  test("pH on the Bates–Guggenheim scale: γ(H⁺)·γ(Cl⁻) is Pitzer's own (a measurable product) and γ(Cl⁻) is −A√I/(1 + 1.5√I) (Bates & Guggenheim 1960)", () => {
+    const r = solveEquilibrium(f.referenceMixture([["HCl", 0.01], ["NaCl", 0.2]]), { activity: "pitzer" });
+    if (!r.ok) throw new Error(r.message);
+    const conc = (n: string) => r.species.find((x) => x.name === n)!.conc;
+    const names = ["H+", "OH-", "Na+", "Cl-"];
+    const m = [conc("H+"), conc("OH-"), conc("Na+"), conc("Cl-")];
+    const lnG = m.map(() => 0);
+    new PitzerModel(names, [1, -1, 1, -1]).evaluate(m, Aphi, lnG);
+    const A = debyeHuckelA(25);
+    const lnClBG = (-Math.LN10 * A * Math.sqrt(r.ionicStrength)) / (1 + 1.5 * Math.sqrt(r.ionicStrength));
+    f.expectRel(Math.log(r.gammaH), lnG[0] + lnG[3] - lnClBG, 1e-9, "ln γH = ln(γH·γCl)Pitzer − ln γCl(Bates–Guggenheim)");
+    // and the scale is not Pitzer's own: in this NaCl medium at I ≈ 0.21 the two differ by 0.0022 in log γ
+    expect(Math.abs(Math.log(r.gammaH) - lnG[0]) / Math.LN10).toBeGreaterThan(0.0015);
   });
 
   test("β by difference agrees with the slope of the titration curve", () => {
