@@ -12,8 +12,9 @@ import path from "node:path";
 // 120 KB on its own; the change record, pin and export stamp (about 8 KB) are the library's job too.
 // Complexes, solids, edetate and their sources (issue 21) added about 10 KB of data.
 // The measured conditions of a pKa (schema, the conversion, its words and checks) about 3.5 KB.
-// The sources and notes of the values verified in the second round of issue 16 about 2.6 KB more.
-const LIBRARY_BUDGET_BYTES = 160 * 1024;
+// The sources and notes of the values verified in the second round of issue 16 about 2.6 KB more,
+// the third round's (lysine, glutamate, phthalate, phosphate pK3) about 1.3 KB (160.2 KB measured).
+const LIBRARY_BUDGET_BYTES = 161 * 1024;
 
 const bundle = (entry: string) =>
   buildSync({
