@@ -99,6 +99,12 @@ describe("Sørensen phosphate table, Pitzer (test/reference/sorensen-phosphate.j
   });
 });
 
+describe("phosphate buffers with NaCl, Pitzer (test/reference/phosphate-saline.json, ±0.1)", () => {
+  test.each(casesOf("phosphate-saline"))("$id: $label: pH $expected", (c) => {
+    f.expectReference(pitzerPH(c), c, `${c.label}, Pitzer`);
+  });
+});
+
 describe("primary standards under Pitzer (test/reference/ph-standards.json)", () => {
   // Issue 20: the standards unchanged within 0.01 from the default model. On the Bates–Guggenheim
   // scale every standard stays within 0.007 of Davies; the equimolal and 1:3.5 phosphate standards
