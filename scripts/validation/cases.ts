@@ -79,6 +79,7 @@ const GROUPS: [string, string][] = [
   ["6. pKa at other temperatures (I = 0)", "carbonate-pk1"],
   ["6. pKa at other temperatures (I = 0)", "carbonate-pk2"],
   ["6. pKa at other temperatures (I = 0)", "goods-buffers-37"],
+  ["6. pKa at other temperatures (I = 0)", "roy-1997-mes-tes"],
   ["6. pKa at other temperatures (I = 0)", "new-systems-pk"],
   ["7. Molar masses", "molar-masses"],
   ["8. Preparation tables (mixtures of stocks)", "sorensen-phosphate"],
