@@ -50,5 +50,6 @@ export {
   unknownActivityModelMessage,
   readActivityModel,
 } from "./activity/models";
+export { pitzerCoverage, pitzerRuleText, PITZER_STATUS_TEXT, type PitzerCoverage, type PitzerParameterLine, type PitzerRule } from "./activity/pitzer-provenance";
 export { checkTemperature, readTemperature } from "./validate-options";
 export { isBlankCell, cellPosition, pairShapeProblem, pairAt, EMPTY_MIXTURE_MESSAGE } from "./name-amount-pairs";

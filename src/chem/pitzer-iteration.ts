@@ -33,6 +33,7 @@
 import { daviesLog10Gamma } from "./activity/davies";
 import { analogueOf, binaryParameters, COVERED_IONS, osmoticSlope, pitzerModelFor, type PitzerModel } from "./activity/pitzer";
 import { strongIonName, systemSpeciesName } from "./activity/pitzer-ions";
+import { unverifiedParametersAmong } from "./activity/pitzer-provenance";
 import type { Aggregate } from "./aggregate";
 import { DEFAULTS, LIMITS } from "./defaults";
 import { LN10 } from "./physical-constants";
@@ -211,6 +212,8 @@ export class PitzerState {
       }
     }
     if (pairs.length > 0) out.push(`No published Pitzer parameters here for the pair${pairs.length === 1 ? "" : "s"} ${pairs.join(", ")}: taken as zero.`);
+    const unverified = unverifiedParametersAmong(this.names.filter((n, i) => !this.fallback[i] && major(i)));
+    if (unverified.length > 0) out.push(`Pitzer parameters from memory, unverified, are used here: ${unverified.join(", ")}.`);
     if (Math.abs(temperatureC - DEFAULTS.temperatureC) > LIMITS.missingEnthalpyWarnK) {
       out.push(`The Pitzer parameters are 25 °C values (only the Debye–Hückel slope follows the temperature).`);
     }

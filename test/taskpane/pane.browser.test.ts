@@ -131,6 +131,23 @@ describe("task pane in Chromium with office.js from the npm copy", () => {
     await page.screenshot({ path: path.join(ARTIFACTS, "taskpane.png"), fullPage: true });
   });
 
+  test("a built-in system shows the Pitzer model's parameters with source and status, and the rule for species without any (issue 20)", async () => {
+    await search(page, "phosphate");
+    const item = entry(page, "system", "phosphate");
+    if ((await item.locator(".entry-head").getAttribute("aria-expanded")) !== "true") await item.locator(".entry-head").click();
+    await item.locator("details.ion-specific summary").click();
+    const text = await item.locator("details.ion-specific").innerText();
+    expect(text).toMatch(/Pitzer activity \(ion-specific\): \d+ parameter sets/);
+    expect(text).toMatch(/Na⁺–H₂PO₄⁻: β0 = −0\.0533, β1 = 0\.0396, Cφ = 0\.00795/);
+    expect(text).toMatch(/Source: Pitzer & Mayorga, J\. Phys\. Chem\. 77, 2300 \(1973\)/);
+    expect(text).toMatch(/Hershey, Fernandez & Millero/);
+    await search(page, "citrate");
+    const cit = entry(page, "system", "citrate");
+    if ((await cit.locator(".entry-head").getAttribute("aria-expanded")) !== "true") await cit.locator(".entry-head").click();
+    await cit.locator("details.ion-specific summary").click();
+    expect(await cit.locator("details.ion-specific").innerText()).toMatch(/HCit²⁻ has no published Pitzer parameters here: the parameters of HPO₄²⁻ are used/);
+  });
+
   test("try-it uses the new entry through the library in effect", async () => {
     const result = await tryPH(page, "HB7 base", "10 mM");
     expect(result).toMatch(/HB-7 free base — workbook library/);

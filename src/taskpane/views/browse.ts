@@ -8,6 +8,7 @@ import type { PaneController, EditDraft } from "../controller";
 import { displayName } from "../charts/palette";
 import { citation, entryName, entrySummary, filterEntries, KIND_LABEL, LAYER_LABEL, overrideText, valuesOf } from "../describe";
 import { button, resultMessage, select } from "./ui";
+import { ACTIVITY_MODELS, pitzerCoverage, pitzerRuleText } from "../../chem";
 
 const SHOWN = 120;
 
@@ -165,7 +166,36 @@ export class BrowseView {
       provs.length
         ? el("ol", { class: "values prov-list", "aria-label": "Sources and provenance" }, ...provs.map((p) => el("li", { class: "prov" }, provs.length > 1 ? `[${provs.indexOf(p) + 1}] ${p}` : `Source: ${p}`)))
         : null,
+      entry.kind === "system" || entry.kind === "ion" ? this.pitzer(entry.kind, entry.id) : null,
       this.actions(entry),
+    );
+  }
+
+  /** The "pitzer" activity model's parameters for this system's species or this ion, each with its source and status, and the rule for species without any. */
+  private pitzer(kind: "system" | "ion", id: string): HTMLElement {
+    const c = pitzerCoverage(kind, id);
+    const count = c.lines.length === 1 ? "1 parameter set" : `${c.lines.length} parameter sets`;
+    return el(
+      "details",
+      { class: "ion-specific" },
+      el("summary", {}, `${ACTIVITY_MODELS.pitzer.label}: ${count}${c.rules.length ? ", fallback rule" : ""}`),
+      c.lines.length
+        ? el(
+            "ul",
+            { class: "values", "aria-label": "Pitzer parameters" },
+            ...c.lines.map((l) =>
+              el(
+                "li",
+                { class: l.flagged ? "flagged" : "" },
+                el("span", {}, `${l.ions.map(displayName).join(l.kind === "binary" ? "–" : ", ")}: `),
+                el("span", { class: "amount" }, l.values),
+                el("span", { class: `badge ${l.flagged ? "flag" : "layer-builtin"}` }, l.statusText),
+                el("p", { class: "prov" }, `Source: ${l.source}`),
+              ),
+            ),
+          )
+        : null,
+      ...c.rules.map((r) => el("p", { class: "hint" }, pitzerRuleText(r, displayName))),
     );
   }
 
