@@ -25,12 +25,15 @@ test("phosphate: Pitzer & Mayorga's binary sets for its three anions with Na⁺ 
   expect(c.rules).toEqual([]);
 });
 
-test("a value from memory is flagged and says so once (sodium with acetate; θ of K⁺ and Na⁺)", () => {
+test("a value from memory is flagged and says so once (sodium with acetate; θ of H⁺ and K⁺); a seen one is not (θ of K⁺ and Na⁺)", () => {
   const acetate = pitzerCoverage("system", "acetate").lines.find((l) => l.ions.join() === "Na+,CH3COO-")!;
   expect(acetate.flagged).toBe(true);
   expect(acetate.statusText).toMatch(/^from memory, unverified \(the pytzer copy/);
+  const hk = pitzerCoverage("ion", "k").lines.find((l) => l.kind === "theta" && l.ions.includes("H+"))!;
+  expect(hk).toMatchObject({ flagged: true, statusText: "from memory, unverified" });
   const kna = pitzerCoverage("ion", "k").lines.find((l) => l.kind === "theta" && l.ions.includes("Na+"))!;
-  expect(kna).toMatchObject({ flagged: true, statusText: "from memory, unverified" });
+  expect(kna).toMatchObject({ flagged: false, values: "θ = −0.0032" });
+  expect(kna.source).toMatch(/^Geochem\. Trans\. 6, 19 \(2005\)/);
 });
 
 test("citrate borrows the phosphate analogue, Tris and histidine take Davies, a system the model does not name says so", () => {

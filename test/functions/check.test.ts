@@ -149,8 +149,9 @@ describe("AQ.CHECK under the Pitzer model (issue 20: a fallback rule is flagged)
   test("a phosphate buffer with saline has every parameter: no fallback reason", () => {
     expect(check('=AQ.CHECK({"NaH2PO4";"Na2HPO4";"NaCl"},{0.01;0.01;0.15},25,"pitzer")')).toMatch(/^OK: buffer/);
   });
-  test("parameters from memory, unverified, are named: sodium with acetate, θ of K⁺ and Na⁺ in a K/Na phosphate", () => {
+  test("parameters from memory, unverified, are named: sodium with acetate; θ and ψ of H⁺ with K⁺ in HCl + KCl; none in a K/Na phosphate", () => {
     expect(check('=AQ.CHECK({"acetic acid";"sodium acetate"},{0.05;0.05},25,"pitzer")')).toMatch(/^CHECK: .*Pitzer parameters from memory, unverified, are used here: Na\+–CH3COO-\.$/);
-    expect(check('=AQ.CHECK({"KH2PO4";"Na2HPO4"},{0.025;0.025},25,"pitzer")')).toMatch(/from memory, unverified, are used here: θ\(K\+, Na\+\)\.$/);
+    expect(check('=AQ.CHECK({"HCl";"KCl"},{0.01;0.1},25,"pitzer")')).toMatch(/from memory, unverified, are used here: θ\(H\+, K\+\), ψ\(H\+, K\+, Cl-\)\.$/);
+    expect(check('=AQ.CHECK({"KH2PO4";"Na2HPO4"},{0.025;0.025},25,"pitzer")')).not.toMatch(/from memory/);
   });
 });
