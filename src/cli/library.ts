@@ -7,7 +7,7 @@
  * line naming it, and the run stops: constants are never replaced silently.
  */
 import { readFileSync } from "node:fs";
-import { formatIssue, getActiveLibrary, loadLayer, mergeLibraryDocs, parseLibraryText, setLayer, type LibraryDoc } from "../library";
+import { getActiveLibrary, issueWords, loadLayer, mergeLibraryDocs, parseLibraryText, setLayer, type LibraryDoc } from "../library";
 import { workbookStorage } from "./workbook-library";
 
 export class LibraryError extends Error {}
@@ -52,14 +52,14 @@ export async function useLibraries(workbookText: string | null, files: readonly 
     let merged: LibraryDoc | null = null;
     for (const file of files) {
       const parsed = parseLibraryText(readText(file), merged ? [...below, merged] : below);
-      if (!parsed.ok) throw new LibraryError(`library file '${file}' is not usable: ${parsed.errors.slice(0, 3).map(formatIssue).join("; ") || parsed.message}`);
+      if (!parsed.ok) throw new LibraryError(`library file '${file}' is not usable: ${parsed.message}`);
       merged = mergeLibraryDocs(merged, parsed.library);
     }
     const applied = setLayer("personal", merged);
-    if (!applied.ok) throw new LibraryError(`the --library files do not fit together: ${applied.errors.slice(0, 3).map(formatIssue).join("; ") || applied.message}`);
+    if (!applied.ok) throw new LibraryError(`the --library files do not fit together: ${applied.message}`);
     parts.push(files.length === 1 ? "--library file" : `${files.length} --library files`);
   }
   const lib = getActiveLibrary();
-  const warnings = lib.problems.filter((p) => p.severity === "error").map((p) => `${p.layer} library: ${formatIssue(p)}`);
+  const warnings = lib.problems.filter((p) => p.severity === "error").map((p) => issueWords(lib.layers[p.layer], p, `${p.layer} library`));
   return { fingerprint: lib.fingerprint(), layers: parts.join(" + "), warnings };
 }

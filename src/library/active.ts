@@ -21,7 +21,7 @@ export interface LayerProblem {
 
 export type SetLayerResult =
   | { ok: true; library: Library }
-  | { ok: false; code: ValidationCode; message: string; errors: ValidationIssue[] };
+  | { ok: false; code: ValidationCode; message: string; errors: ValidationIssue[]; lines: string[] };
 
 type Listener = (library: Library) => void;
 

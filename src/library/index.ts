@@ -12,6 +12,7 @@ export { parseFormula, molarMassOf } from "./formula";
 export { validateLibraryDoc } from "./validate";
 export type { ValidationResult, ValidationCode } from "./validate";
 export { formatIssue } from "./validate/paths";
+export { fieldWords, issueLines, issueWords, once } from "./validate/words";
 export { computeFingerprint } from "./fingerprint";
 export { getActiveLibrary, referenceContext, setLayer, reportLayerProblem, getLayerProblems, onLibraryChange, resetActiveLibrary } from "./active";
 export type { UserLayer, LayerProblem, SetLayerResult } from "./active";

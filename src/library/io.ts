@@ -19,9 +19,9 @@ export type ImportCode = "too-large" | "not-json" | ValidationCode;
 
 export type ParseResult =
   | { ok: true; library: LibraryDoc }
-  | { ok: false; code: ImportCode; message: string; errors: ValidationIssue[] };
+  | { ok: false; code: ImportCode; message: string; errors: ValidationIssue[]; lines: string[] };
 
-export type ImportResult = { ok: true; library: Library } | { ok: false; code: ImportCode; message: string; errors: ValidationIssue[] };
+export type ImportResult = { ok: true; library: Library } | { ok: false; code: ImportCode; message: string; errors: ValidationIssue[]; lines: string[] };
 
 /** UTF-8 byte length without allocating for the common case. */
 export function utf8Length(text: string): number {
@@ -42,23 +42,23 @@ const mb = (bytes: number): string => `${(bytes / (1024 * 1024)).toFixed(1)} MB`
 
 /** Parse and validate a library file's text. `context`: the layers it will sit on. */
 export function parseLibraryText(text: string, context: readonly LibraryDoc[] = []): ParseResult {
-  if (typeof text !== "string") return { ok: false, code: "not-json", message: "a library file is text", errors: [] };
+  if (typeof text !== "string") return { ok: false, code: "not-json", message: "a library file is text", errors: [], lines: ["a library file is text"] };
   const bytes = text.length > MAX_LIBRARY_BYTES ? text.length : utf8Length(text);
   if (bytes > MAX_LIBRARY_BYTES) {
     const message = `the file is ${mb(bytes)}; library files are limited to ${mb(MAX_LIBRARY_BYTES)}`;
-    return { ok: false, code: "too-large", message, errors: [{ path: "", message }] };
+    return { ok: false, code: "too-large", message, errors: [{ path: "", message }], lines: [message] };
   }
   let value: unknown;
   try {
     value = JSON.parse(text.charCodeAt(0) === 0xfeff ? text.slice(1) : text);
   } catch (e) {
     const message = `not valid JSON: ${(e as Error).message}`;
-    return { ok: false, code: "not-json", message, errors: [{ path: "", message }] };
+    return { ok: false, code: "not-json", message, errors: [{ path: "", message }], lines: [message] };
   }
   const twice = duplicateKey(text);
   if (twice) {
     const message = `the key '${twice.key}' is written twice in one object (line ${twice.line}); a library file names each field once, so that no value is read in place of another`;
-    return { ok: false, code: "not-json", message, errors: [{ path: "", message }] };
+    return { ok: false, code: "not-json", message, errors: [{ path: "", message }], lines: [message] };
   }
   const v = validateLibraryDoc(value, context);
   return v.ok ? { ok: true, library: v.doc } : v;

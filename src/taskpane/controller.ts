@@ -180,11 +180,14 @@ export class PaneController extends WorkbookActions {
       return fail(`'${fileName}' could not be read: ${e instanceof Error ? e.message : String(e)}`);
     }
     const parsed = parseLibraryText(text, this.contextFor(layer));
-    if (!parsed.ok) return fail(`'${fileName}' was not imported (nothing changed): ${parsed.message}`, parsed.errors.map((e) => `${e.path || "(file)"}: ${e.message}`));
+    // One problem is said in the message; several are counted there and listed once each below it.
+    const refused = (lead: string, r: { message: string; lines: string[] }, one = r.message) =>
+      r.lines.length > 1 ? fail(`${lead}: ${r.lines.length} problems, each named below.`, r.lines) : fail(`${lead}: ${one}`);
+    if (!parsed.ok) return refused(`'${fileName}' was not imported (nothing changed)`, parsed);
     const next = withoutStamp(mode === "merge" ? mergeLibraryDocs(this.library.layers[layer], parsed.library) : clone(parsed.library));
     if (mode === "merge") next.name = this.library.layers[layer]?.name ?? LAYER_DOC_NAME[layer];
     const v = validateLibraryDoc(tidy(next), this.contextFor(layer));
-    if (!v.ok) return fail(`'${fileName}' was not imported (nothing changed): combined with the ${layer} library it ${v.message}`, v.errors.map((e) => `${e.path || "(file)"}: ${e.message}`));
+    if (!v.ok) return refused(`'${fileName}' was not imported (nothing changed): combined with the ${layer} library it would be invalid`, v, v.lines[0]);
     this.pendingImport = { layer, mode, fileName, stamp: describeStamp(parsed.library.exported), changes: describeImport(this.library, layer, parsed.library, mode), next };
     this.changed();
     return { ok: true, preview: this.pendingImport };

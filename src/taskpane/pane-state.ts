@@ -7,7 +7,7 @@
  * store it → put it in effect (setLayer). If storing fails, nothing is put in effect; if the file is
  * invalid, nothing is stored.
  */
-import { layerIssueWords, once } from "./issue-words";
+import { issueWords, once } from "../library";
 import { getActiveLibrary, loadLayer, makeBlob, makeChange, referenceContext, setLayer, validateLibraryDoc, withChange } from "../library";
 import type { ChangeInput, EntryKind, Library, LibraryDoc, UserLayer, ValidationIssue } from "../library";
 import type { FieldIssue } from "./forms";
@@ -162,7 +162,7 @@ export class PaneState {
     this.changed();
     const warnings = [
       ...storageWarnings,
-      ...this.library.problems.filter((p) => !before.has(`${p.layer}:${p.path}:${p.message}`)).map((p) => `${p.layer} library, ${p.path}: ${p.message}`),
+      ...this.library.problems.filter((p) => !before.has(`${p.layer}:${p.path}:${p.message}`)).map((p) => issueWords(this.library.layers[p.layer], p, `${p.layer} library`)),
     ];
     const after = store.afterChange ? await store.afterChange() : null;
     if (after) warnings.push(after);
@@ -175,7 +175,7 @@ export class PaneState {
     for (const e of errors) {
       if (entryPath !== null && (e.path === entryPath || e.path.startsWith(`${entryPath}.`) || e.path.startsWith(`${entryPath}[`))) {
         issues.push({ path: e.path.slice(entryPath.length).replace(/^\./, ""), message: e.message });
-      } else other.push(layerIssueWords(doc, LAYER_DOC_NAME[layer], e.path, e.message));
+      } else other.push(issueWords(doc, e, LAYER_DOC_NAME[layer].toLowerCase()));
     }
     const n = issues.length + once(other).length;
     return { ok: false, message: `Not saved: ${n} problem${n === 1 ? "" : "s"} to fix.`, issues, other: once(other) };

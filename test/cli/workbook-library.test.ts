@@ -125,5 +125,12 @@ describe("--library FILE.json", () => {
     const invalid = run(["eval", "--library", bad, "=1"]);
     expect(invalid.code).toBe(2);
     expect(invalid.err).toMatch(new RegExp(`^protolyte: library file '${bad.replace(/[.*+?^${}()|[\]\\/]/g, "\\$&")}' is not usable: .+\\n$`));
+    // named in words, not by path (issue 17 item 9)
+    const salt = join(dir, "salt.json");
+    writeFileSync(salt, JSON.stringify({ format: "protolyte-library", schemaVersion: 1, name: "x", substances: [{ id: "hb-9-na", name: "HB-9 sodium salt", nature: "weak-acid-base", formula: "C7H14NNaO5S", systems: [{ system: "hb-9", stoich: 1, protons: 0 }] }] }));
+    const words = run(["eval", "--library", salt, "=1"]);
+    expect(words.code).toBe(2);
+    expect(words.err).toMatch(/is not usable: invalid library: HB-9 sodium salt uses the system 'hb-9', which no library in effect holds .*, or choose another\n$/);
+    expect(words.err).not.toMatch(/substances\[0\]/);
   });
 });

@@ -14,7 +14,9 @@ import path from "node:path";
 // The measured conditions of a pKa (schema, the conversion, its words and checks) about 3.5 KB.
 // The sources and notes of the values verified in the second round of issue 16 about 2.6 KB more,
 // the third round's (lysine, glutamate, phthalate, phosphate pK3) about 1.3 KB (160.2 KB measured).
-const LIBRARY_BUDGET_BYTES = 161 * 1024;
+// Problems in words naming the entry (validate/words.ts, moved down from the pane so that an
+// imported file and the command line say them the same way) about 1.5 KB (163.2 KB measured then).
+const LIBRARY_BUDGET_BYTES = 164 * 1024;
 
 const bundle = (entry: string) =>
   buildSync({

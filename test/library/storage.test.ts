@@ -44,7 +44,7 @@ describe("blob encoding", () => {
     ["another program's data", '{"theme":"dark"}', "corrupt", /not a Protolyte library/],
     ["a newer storage version", stored().replace('"blobVersion":1', '"blobVersion":2'), "newer-version", /newer Protolyte \(storage version 2\)/],
     ["a library of a newer schema", stored().replace('"schemaVersion":1', '"schemaVersion":3'), "newer-version", /newer Protolyte/],
-    ["a damaged entry", stored().replace('"topCharge":0', '"topCharge":"zero"'), "corrupt", /systems\[0\]\.topCharge: expected an integer/],
+    ["a damaged entry", stored().replace('"topCharge":0', '"topCharge":"zero"'), "corrupt", /damaged: HB zwitterion, charge of the fully protonated form: expected an integer/],
     ["an unsafe key", stored().replace('"name":"HB zwitterion"', '"name":"HB zwitterion","__proto__":{}'), "corrupt", /__proto__/],
     ["no save time", stored().replace(/"savedAt":"[^"]*",/, ""), "corrupt", /no save time/],
   ];

@@ -113,9 +113,24 @@ describe("a failed import changes nothing", () => {
     await expectUnchanged(file({ hello: "world" }), 17, /not a Protolyte library file/);
   });
 
-  test("an invalid value, with the path of the problem", async () => {
+  test("an invalid value, naming the entry and the field in words", async () => {
     const text = file({ format: LIBRARY_FORMAT, schemaVersion: 1, name: "x", systems: [{ id: "q", name: "q", topCharge: 0, steps: [{ pKa: { value: 4, unit: "kJ/mol", conditions: "25 °C", status: "published", source: "goldberg2002" } }] }] });
-    await expectUnchanged(text, text.length, /systems\[0\]\.steps\[0\]\.pKa\.unit/);
+    await expectUnchanged(text, text.length, /: q, step 1, pKa, unit: /);
+  });
+
+  test("a file's problems are listed in words, naming the entry, each once (issue 17 item 9)", async () => {
+    const salt = { id: "hb-9-na", name: "HB-9 sodium salt", nature: "weak-acid-base", formula: "C7H14NNaO5S", systems: [{ system: "hb-9", stoich: 1, protons: 0 }] };
+    const text = file({ format: LIBRARY_FORMAT, schemaVersion: 1, name: "x", substances: [salt, { ...salt, id: "hb-9-k", name: "HB-9 potassium salt", formula: "C7H14NKO5S" }] });
+    const { ctl } = await withBase();
+    const r = await ctl.previewImport("workbook", "paper.json", text.length, read(text));
+    if (r.ok) throw new Error("imported");
+    expect(r.errors).toEqual([
+      expect.stringMatching(/^HB-9 sodium salt uses the system 'hb-9', which no library in effect holds .*, or choose another$/),
+      expect.stringMatching(/^HB-9 potassium salt uses the system 'hb-9'/),
+    ]);
+    // counted in the message, each said once below it (not also in the message)
+    expect(r.message).toBe("'paper.json' was not imported (nothing changed): 2 problems, each named below.");
+    expect(`${r.message} ${r.errors.join(" ")}`).not.toMatch(/substances\[\d\]|systems\[\d\]/);
   });
 
   test("an unsafe key", async () => {

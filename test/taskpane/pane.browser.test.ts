@@ -258,7 +258,9 @@ describe("task pane in Chromium with office.js from the npm copy", () => {
     await waitForText(page.locator("#import-outcome"), /'broken\.json' was not imported \(nothing changed\): not valid JSON/);
     const invalid = JSON.stringify({ format: "protolyte-library", schemaVersion: 1, name: "x", systems: [{ id: "q", name: "q", topCharge: 0, steps: [{ pKa: { value: 99, unit: "1", conditions: "25 °C", status: "published", source: "goldberg2002" } }] }] });
     await chooseFile(page, "invalid.json", invalid);
-    await waitForText(page.locator("#import-outcome"), /systems\[0\]\.steps\[0\]\.pKa\.value/);
+    // named in words (the entry, the step, the field), not by its path in the file
+    await waitForText(page.locator("#import-outcome"), /'invalid\.json' was not imported \(nothing changed\): invalid library: q, step 1, pKa: must be ≤ 30, found 99/);
+    expect(await page.locator("#import-outcome").innerText()).not.toMatch(/systems\[0\]/);
     const huge = path.join(session.browser.profile, "huge.json");
     fs.writeFileSync(huge, Buffer.alloc(5 * 1024 * 1024 + 10, 32));
     await chooseFile(page, "huge.json", { path: huge });

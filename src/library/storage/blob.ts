@@ -4,7 +4,6 @@
  */
 import { MAX_LIBRARY_BYTES, utf8Length } from "../io";
 import type { LibraryDoc } from "../types";
-import { formatIssue } from "../validate/paths";
 import { validateLibraryDoc } from "../validate";
 import {
   BLOB_FORMAT,
@@ -50,7 +49,7 @@ export function decodeBlob(raw: string | null): LoadResult {
   const checked = validateLibraryDoc(v.library, [], { ignoreReferences: true });
   if (!checked.ok) {
     if (checked.code === "newer-version") return { ok: false, code: "newer-version", message: `the stored library ${checked.message}`, raw };
-    return corrupt(raw, `the stored library is damaged: ${checked.errors.slice(0, 3).map(formatIssue).join("; ")}`);
+    return corrupt(raw, `the stored library is damaged: ${checked.lines.slice(0, 3).join("; ")}${checked.lines.length > 3 ? ` (and ${checked.lines.length - 3} more)` : ""}`);
   }
   return { ok: true, blob: { format: BLOB_FORMAT, blobVersion: BLOB_VERSION, savedAt: v.savedAt, library: checked.doc } };
 }

@@ -6,10 +6,10 @@
 import schemaJson from "../schema/library.schema.json";
 import type { LibraryDoc, ValidationIssue } from "../types";
 import { LIBRARY_FORMAT, SCHEMA_VERSION } from "../types";
-import { formatIssue } from "./paths";
 import { checkAgainstSchema, type Schema } from "./schema-check";
 import { checkSemantics } from "./semantics";
 import { findUnsafeKeys } from "./unsafe-keys";
+import { issueLines } from "./words";
 
 export const LIBRARY_SCHEMA = schemaJson as unknown as Schema;
 
@@ -17,12 +17,13 @@ export type ValidationCode = "unsafe-key" | "wrong-format" | "newer-version" | "
 
 export type ValidationResult =
   | { ok: true; doc: LibraryDoc }
-  | { ok: false; code: ValidationCode; message: string; errors: ValidationIssue[] };
+  | { ok: false; code: ValidationCode; message: string; errors: ValidationIssue[]; lines: string[] };
 
-function failure(code: ValidationCode, lead: string, errors: ValidationIssue[]): ValidationResult {
-  const shown = errors.slice(0, 3).map(formatIssue).join("; ");
-  const more = errors.length > 3 ? ` (and ${errors.length - 3} more)` : "";
-  return { ok: false, code, message: `${lead}: ${shown}${more}`, errors };
+/** The problems in words (naming entries, each line once); the message shows the first three. */
+function failure(code: ValidationCode, lead: string, errors: ValidationIssue[], doc: unknown): ValidationResult {
+  const lines = issueLines(doc, errors);
+  const more = lines.length > 3 ? ` (and ${lines.length - 3} more)` : "";
+  return { ok: false, code, message: `${lead}: ${lines.slice(0, 3).join("; ")}${more}`, errors, lines };
 }
 
 /** Structural check only (the JSON Schema), for tests comparing with ajv. */
@@ -42,26 +43,26 @@ export function validateLibraryDoc(
   options: { ignoreReferences?: boolean } = {},
 ): ValidationResult {
   const unsafe = findUnsafeKeys(value);
-  if (unsafe.length) return failure("unsafe-key", "refused", unsafe);
+  if (unsafe.length) return failure("unsafe-key", "refused", unsafe, value);
   const top = typeof value === "object" && value !== null && !Array.isArray(value) ? (value as Record<string, unknown>) : null;
   if (!top || top.format !== LIBRARY_FORMAT) {
-    return failure("wrong-format", "not a Protolyte library file", [{ path: "format", message: `must be '${LIBRARY_FORMAT}'` }]);
+    return failure("wrong-format", "not a Protolyte library file", [{ path: "format", message: `must be '${LIBRARY_FORMAT}'` }], value);
   }
   const v = top.schemaVersion;
   if (typeof v === "number" && Number.isInteger(v) && v > SCHEMA_VERSION) {
     return failure("newer-version", "made by a newer Protolyte", [
       { path: "schemaVersion", message: `is ${v}; this version reads schemaVersion ${SCHEMA_VERSION}. Update Protolyte to open it.` },
-    ]);
+    ], value);
   }
   if (v !== SCHEMA_VERSION) {
-    return failure("wrong-version", "unsupported schema version", [{ path: "schemaVersion", message: `must be ${SCHEMA_VERSION}, found ${JSON.stringify(v)}` }]);
+    return failure("wrong-version", "unsupported schema version", [{ path: "schemaVersion", message: `must be ${SCHEMA_VERSION}, found ${JSON.stringify(v)}` }], value);
   }
   const shape = checkShape(value);
-  if (shape.length) return failure("invalid", "invalid library", shape);
+  if (shape.length) return failure("invalid", "invalid library", shape, value);
   const doc = value as LibraryDoc;
   const semantic = checkSemantics(doc, context)
     .filter((i) => !(options.ignoreReferences && i.reference))
     .map(({ path, message }) => ({ path, message }));
-  if (semantic.length) return failure("invalid", "invalid library", semantic);
+  if (semantic.length) return failure("invalid", "invalid library", semantic, value);
   return { ok: true, doc };
 }

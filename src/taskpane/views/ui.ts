@@ -1,7 +1,7 @@
 /** Small building blocks shared by the views: messages, labelled fields, downloads. All text is text. */
 import { el, uid, type Child } from "../dom";
 import type { ActionResult } from "../controller";
-import { fieldWords, once } from "../issue-words";
+import { fieldWords, once } from "../../library";
 
 export type Tone = "ok" | "error" | "warn";
 
