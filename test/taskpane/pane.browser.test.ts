@@ -141,6 +141,7 @@ describe("task pane in Chromium with office.js from the npm copy", () => {
     expect(text).toMatch(/Na⁺–H₂PO₄⁻: β0 = −0\.0533, β1 = 0\.0396, Cφ = 0\.00795/);
     expect(text).toMatch(/Source: Pitzer & Mayorga, J\. Phys\. Chem\. 77, 2300 \(1973\)/);
     expect(text).toMatch(/Hershey, Fernandez & Millero/);
+    await item.locator("details.ion-specific").screenshot({ path: path.join(ARTIFACTS, "taskpane-pitzer.png") });
     await search(page, "citrate");
     const cit = entry(page, "system", "citrate");
     if ((await cit.locator(".entry-head").getAttribute("aria-expanded")) !== "true") await cit.locator(".entry-head").click();
