@@ -19,6 +19,7 @@ import { ComplexingSolver } from "./complex-solver";
 import { ACTIVITY_MODELS } from "./activity/models";
 import { PitzerState, pitzerBufferValue, solvePitzer } from "./pitzer-iteration";
 import { bufferValue } from "./beta";
+import { metalDistributionOf, type MetalDistribution } from "./metal-distribution";
 
 export class PreparedMixture {
   readonly ok = true as const;
@@ -114,6 +115,15 @@ export class PreparedMixture {
     const bad = this.run(opts);
     if (bad) return bad;
     return this.report();
+  }
+
+  /**
+   * After a solve: each metal ion that forms complexes here, free and in each complex, over the meter
+   * pH values given at the solve's temperature and ionic strength (metal-distribution.ts); [] when no
+   * metal forms a complex in this mixture.
+   */
+  metalDistribution(pH: readonly number[]): MetalDistribution[] {
+    return this.core instanceof ComplexingSolver ? metalDistributionOf(this.core, this.aggregate, pH) : [];
   }
 
   /** Fast path: pH, p[H] and ionic strength only ("beyond-limit" as solve). */

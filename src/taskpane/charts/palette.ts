@@ -35,9 +35,13 @@ const SUP: Record<string, string> = { "0": "⁰", "1": "¹", "2": "²", "3": "³
 /**
  * A species name as a chemist writes it: H2PO4- → H₂PO₄⁻, HPO4^2- → HPO₄²⁻, CO2(aq) → CO₂(aq).
  * Digits after a letter or ")" become subscripts; a charge written "^2-" or a final "+"/"-" after a
- * letter, digit or ")" becomes a superscript. Anything else is left as it is.
+ * letter, digit or ")" becomes a superscript. Anything else is left as it is. Given the charge, a name
+ * that ends in it without "^" (Ca2+) shows it as the charge: Ca²⁺.
  */
-export function displayName(name: string): string {
+export function displayName(name: string, charge?: number): string {
+  // A charge of 2 or more written without "^" after the symbol (Ca2+, Fe3+): the digits are the charge.
+  const z = charge === undefined ? "" : `${Math.abs(charge)}${charge > 0 ? "+" : "-"}`;
+  if (Math.abs(charge ?? 0) >= 2 && name.endsWith(z) && !name.includes("^")) return displayName(name.slice(0, -z.length)) + [...z].map((c) => SUP[c]).join("");
   let s = name.replace(/\^(\d*)([+-])$/, (_, d: string, sign: string) => [...d, sign].map((c) => SUP[c]).join(""));
   s = s.replace(/([A-Za-z0-9)])([+-])$/, (_, before: string, sign: string) => before + SUP[sign]);
   // a word such as "form 2" or "(1-)" stays; digits glued to a letter or ")" are counts of atoms

@@ -16,7 +16,7 @@
  * mixture's own pH they coincide with the solved speciation (test/taskpane/charts.test.ts).
  */
 import { apparentPKa, debyeHuckelA, log10Gamma, prepare, DEFAULTS } from "../../chem";
-import type { AcidBaseSystem, ActivityModel, Failure, Mixture, Regime } from "../../chem";
+import type { AcidBaseSystem, ActivityModel, Failure, MetalDistribution, Mixture, Regime } from "../../chem";
 
 export const SPECIATION_PH_MIN = 0;
 export const SPECIATION_PH_MAX = 14;
@@ -55,6 +55,8 @@ export interface SpeciationData {
   activity: ActivityModel;
   regime: Regime;
   systems: SystemSpeciation[];
+  /** Each metal ion that forms complexes here: free and in each complex (empty when none). */
+  metals: MetalDistribution[];
   warnings: string[];
 }
 
@@ -112,5 +114,6 @@ export function speciation(mix: Mixture, opts: SpeciationOptions = {}): Speciati
       crossings: pKs.map((pK) => pK - log10GammaH),
     });
   }
-  return { ok: true, pH: axis, mixturePH: eq.pH, temperatureC, ionicStrength: I, pKw: eq.pKw, activity, regime: eq.regime, systems, warnings: eq.warnings };
+  const metals = p.metalDistribution(axis);
+  return { ok: true, pH: axis, mixturePH: eq.pH, temperatureC, ionicStrength: I, pKw: eq.pKw, activity, regime: eq.regime, systems, metals, warnings: eq.warnings };
 }

@@ -1,4 +1,5 @@
 /** Words for the charts: titles, summaries (aria-label, <desc>) and number formats. Pure. */
+import type { MetalDistribution } from "../../chem";
 import type { SpeciationData, SystemSpeciation } from "./speciation";
 import type { TitrationData } from "./titration";
 
@@ -48,6 +49,34 @@ export function speciationSummary(sys: SystemSpeciation, d: SpeciationData): str
     `At the mixture's pH ${d.mixturePH.toFixed(2)}: ${list(main)}. ` +
     `Neighbouring forms are present in equal amounts at pH ${list(cross)}.`
   );
+}
+
+export function metalTitle(m: MetalDistribution): string {
+  return `${m.name} free and in complexes from pH 0 to 14`;
+}
+
+/** The lowest pH at which the free ion falls to half of the metal's total (interpolated), or null. */
+export function halfFreePH(m: MetalDistribution, pH: readonly number[]): number | null {
+  const f = m.forms[0].fractions;
+  for (let i = 0; i + 1 < f.length; i++) {
+    if (f[i] >= 0.5 && f[i + 1] < 0.5) return pH[i] + ((f[i] - 0.5) / (f[i] - f[i + 1])) * (pH[i + 1] - pH[i]);
+  }
+  return null;
+}
+
+/** One sentence a screen reader can say instead of the metal's picture. */
+export function metalSummary(m: MetalDistribution, d: SpeciationData): string {
+  const main = m.forms
+    .filter((f) => f.atMixture >= 0.01)
+    .sort((a, b) => b.atMixture - a.atMixture)
+    .map((f) => `${f.name} ${pct(f.atMixture)}`);
+  const half = halfFreePH(m, d.pH);
+  const free = m.forms[0].fractions;
+  return (
+    `${metalTitle(m)} at ${conditions(d)}, as % of its total. ` +
+    `At the mixture's pH ${d.mixturePH.toFixed(2)}: ${list(main)}. ` +
+    (half !== null ? `Half of it is free at pH ${half.toFixed(2)}.` : free.every((f) => f >= 0.5) ? "The free ion is more than half of it over the whole range." : free.every((f) => f < 0.5) ? "The free ion is less than half of it over the whole range." : "")
+  ).trim();
 }
 
 export function titrationTitle(t: TitrationData): string {

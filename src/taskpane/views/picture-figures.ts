@@ -6,9 +6,10 @@
 import { el } from "../dom";
 import { renderCurve } from "../charts/curve-svg";
 import { displayName } from "../charts/palette";
-import { renderSpeciation } from "../charts/speciation-svg";
+import { renderMetalDistribution, renderSpeciation } from "../charts/speciation-svg";
+import type { MetalDistribution } from "../../chem";
 import type { SpeciationData, SystemSpeciation } from "../charts/speciation";
-import { mL, pct } from "../charts/summary";
+import { halfFreePH, mL, pct } from "../charts/summary";
 import type { TitrationData } from "../charts/titration";
 
 function numbers(summary: string, table: HTMLTableElement): HTMLElement {
@@ -36,6 +37,30 @@ export function speciationFigure(sys: SystemSpeciation, d: SpeciationData): HTML
   const fig = el("figure", { class: "chart-figure", "data-system": sys.id });
   fig.appendChild(renderSpeciation(document, sys, d));
   fig.appendChild(numbers(`Numbers for ${sys.name} (${(sys.total * 1000).toPrecision(3)} mmol/L in all)`, speciesTable(sys, d)));
+  return fig;
+}
+
+function metalTable(m: MetalDistribution, d: SpeciationData): HTMLTableElement {
+  const head = el("tr", {}, el("th", { scope: "col" }, "Form"), el("th", { scope: "col" }, `At pH ${d.mixturePH.toFixed(2)}`), el("th", { scope: "col" }, "mol/L"));
+  const rows = m.forms.map((f, k) =>
+    el("tr", {}, el("th", { scope: "row" }, `${displayName(f.name, f.charge)}${k === 0 ? " (free)" : ""}`), el("td", {}, pct(f.atMixture)), el("td", {}, (f.atMixture * m.total).toPrecision(3))),
+  );
+  const half = halfFreePH(m, d.pH);
+  const tail = half === null ? [] : [el("tr", { class: "crossing" }, el("th", { scope: "row" }, `Half of ${displayName(m.name, m.charge)} free`), el("td", { colspan: 2 }, `pH ${half.toFixed(2)}`))];
+  return el(
+    "table",
+    { class: "numbers" },
+    el("caption", { class: "visually-hidden" }, `${m.name} in the mixture, free and in each complex`),
+    el("thead", {}, head),
+    el("tbody", {}, ...rows, ...tail),
+  );
+}
+
+/** A metal ion's distribution: free and in each complex against pH, and its numbers. */
+export function metalFigure(m: MetalDistribution, d: SpeciationData): HTMLElement {
+  const fig = el("figure", { class: "chart-figure", "data-metal": m.id });
+  fig.appendChild(renderMetalDistribution(document, m, d));
+  fig.appendChild(numbers(`Numbers for ${displayName(m.name, m.charge)} (${(m.total * 1000).toPrecision(3)} mmol/L in all)`, metalTable(m, d)));
   return fig;
 }
 

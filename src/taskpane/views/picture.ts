@@ -14,7 +14,7 @@ import type { TitrantName } from "../charts/titration";
 import type { SelectedMixture, SelectionExcel } from "../excel-selection";
 import { SelectionFollower } from "../selection-follower";
 import type { TryRow } from "../tryit";
-import { curveFigure, speciationFigure } from "./picture-figures";
+import { curveFigure, metalFigure, speciationFigure } from "./picture-figures";
 import { button, field, message, select, textInput } from "./ui";
 
 export interface PictureDeps {
@@ -104,7 +104,11 @@ export class PictureView {
       excelActions,
       this.facts,
       el("h3", {}, "Speciation"),
-      el("p", { class: "hint" }, "Share of each acid–base system in each form, at this mixture's temperature and ionic strength (held fixed along the pH axis). The dashed line is the mixture's pH."),
+      el(
+        "p",
+        { class: "hint" },
+        "Share of each acid–base system in each form, and of each metal ion that forms complexes free and in each complex, at this mixture's temperature and ionic strength (held fixed along the pH axis). The dashed line is the mixture's pH.",
+      ),
       this.spec,
       el("h3", {}, "Titration curve"),
       form,
@@ -215,7 +219,11 @@ export class PictureView {
       el("p", { class: "result" }, "pH ", el("span", { class: "ph", id: "picture-ph" }, d.mixturePH.toFixed(2)), ` · ${conditions(d)} · ${ACTIVITY_MODELS[d.activity].label}`),
       d.warnings.length ? message("warn", "Note:", d.warnings) : null,
     );
-    replaceChildren(this.spec, ...(d.systems.length ? d.systems.map((sys) => speciationFigure(sys, d)) : [el("p", {}, "No acid–base system in this mixture: nothing to show here.")]));
+    replaceChildren(
+      this.spec,
+      ...(d.systems.length ? d.systems.map((sys) => speciationFigure(sys, d)) : [el("p", {}, "No acid–base system in this mixture: nothing to show here.")]),
+      ...d.metals.map((m) => metalFigure(m, d)),
+    );
     const t = pic.titration;
     replaceChildren(this.curve, t.ok ? curveFigure(t.data) : message("error", `No titration curve: ${t.message}`), t.ok && t.data.warnings.length ? message("warn", "Note:", t.data.warnings) : null);
   }
