@@ -16,7 +16,8 @@ import path from "node:path";
 // the third round's (lysine, glutamate, phthalate, phosphate pK3) about 1.3 KB (160.2 KB measured).
 // Problems in words naming the entry (validate/words.ts, moved down from the pane so that an
 // imported file and the command line say them the same way) about 1.5 KB (163.2 KB measured then).
-const LIBRARY_BUDGET_BYTES = 164 * 1024;
+// Malate's pK, ΔrH° and ΔrCp° from Eden & Bates and maleate pK1, with their sources, about 1.6 KB.
+const LIBRARY_BUDGET_BYTES = 166 * 1024;
 
 const bundle = (entry: string) =>
   buildSync({

@@ -162,6 +162,9 @@ describe("values as read in their published sources (the source and place are in
     ["glutamate", 2, 9.67, "glutamic-acid-dissociation-web"],
     ["phthalate", 0, 2.946, "fromm-polyprotic"], // K1 = 1.13·10⁻³
     ["phthalate", 1, 5.409, "fromm-polyprotic"], // K2 = 3.90·10⁻⁶
+    ["malate", 0, 3.458, "eden-bates-1959-malic"], // K1 = 3.48·10⁻⁴
+    ["malate", 1, 5.1, "eden-bates-1959-malic"],
+    ["maleate", 0, 2.038, "maleic-pk1-bits"],
   ])("%s step %i: pK %d (%s)", (id, i, pKa, source) => {
     const r = sys(id).steps[i].pKa;
     expect([r.value, r.source, r.status]).toEqual([pKa, source, "published"]);
@@ -175,6 +178,11 @@ describe("values as read in their published sources (the source and place are in
   test("a value recalled from a source that could not be read names it but stays unverified", () => {
     const r = sys("phosphate").steps[2].dH!;
     expect([r.value, r.source, r.status]).toEqual([16.0, "goldberg2002", "unverified"]);
+  });
+
+  test("malate: ΔrH° and ΔrCp° from Eden & Bates's equations (2.9 and −1.16 kJ/mol; −155 and −221 J/(K·mol))", () => {
+    const [a, b] = sys("malate").steps;
+    expect([a.dH?.value, a.dCp?.value, b.dH?.value, b.dCp?.value, b.dH?.source]).toEqual([2.9, -155, -1.16, -221, "eden-bates-1959-malic"]);
   });
 
   test("benzoate: ΔrH° and ΔrCp° from the NaCl-media fit (0.3 kJ/mol, −207 J/(K·mol)), its pKa from the NBS table", () => {

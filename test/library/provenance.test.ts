@@ -19,7 +19,7 @@ test("an unverified value that names the source it was recalled from says both",
 });
 
 test("unverified and common-practice values say so", () => {
-  expect(describeProvenance(step("malate", 0).pKa, lookup)).toMatch(/^from memory, unverified/);
+  expect(describeProvenance(step("sorbate", 0).pKa, lookup)).toMatch(/^from memory, unverified/);
   expect(describeProvenance(step("sulfate", 0).pKa, lookup)).toMatch(/^common practice: the first step is treated as fully dissociated/);
   expect(describeProvenance({ value: 1, unit: "1", conditions: "x", status: "unverified", note: "supplier sheet" }, lookup)).toBe(
     "from memory, unverified: supplier sheet",
