@@ -37,7 +37,7 @@ export { idealLog10Gamma } from "./activity/ideal";
 export { log10Gamma } from "./activity/model";
 export { apparentPKa, osmolarity, ionicStrength, PKA_SCALES, type PKaScale } from "./derived";
 export { classifyRegime } from "./regime";
-export { parseDecimal, readDecimal, leadingDecimal } from "./number-text";
+export { parseDecimal, readDecimal, leadingDecimal, UNSIGNED_DECIMAL_SOURCE } from "./number-text";
 export { assessBuffering, BUFFERING, type BufferAssessment, type BufferVerdict } from "./buffering";
 export { beyondIonicLimit, ionicLimitFailure, fmtAgainst, sideOf, IONIC_LIMIT_TEXT, THRESHOLD_ROUNDING } from "./ionic-limit";
 export { parseQuantity, parseTemperatureTolerance, writtenVolumeUnit, type QuantityDimension, type ParseOptions, type WrittenVolumeUnit } from "./units";

@@ -5,10 +5,15 @@
  * "" (16, 3, 15, ∞, 0): text in a cell or a form field never means those.
  */
 
+/**
+ * A decimal number without its sign, as a regular-expression source (no capturing groups; use with
+ * the "i" flag for "1E-3"), for code that finds a number inside longer text ("HCl 37 %").
+ */
+export const UNSIGNED_DECIMAL_SOURCE = String.raw`(?:\d+\.?\d*|\.\d+)(?:e[+-]?\d+)?`;
 /** The whole text is one decimal number (after trimming). */
-const DECIMAL = /^[+-]?(\d+\.?\d*|\.\d+)(e[+-]?\d+)?$/i;
+const DECIMAL = new RegExp(`^[+-]?${UNSIGNED_DECIMAL_SOURCE}$`, "i");
 /** A decimal number at the start of the text (the rest may be a unit). */
-const LEADING_DECIMAL = /^[+-]?(\d+\.?\d*|\.\d+)(e[+-]?\d+)?/i;
+const LEADING_DECIMAL = new RegExp(`^[+-]?${UNSIGNED_DECIMAL_SOURCE}`, "i");
 
 /** The Unicode minus sign (U+2212), as word processors and some keyboards type it, read as "-". */
 function asciiMinus(text: string): string {

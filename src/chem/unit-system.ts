@@ -1,7 +1,8 @@
 /**
- * The trade's units, defined once on a mathjs instance, and the reading of unit text with it.
+ * The trade's units, defined once on mathjs's Unit class, and the reading of unit text with it.
  *
- * mathjs (its Unit class, imported alone with the factories it needs) knows the SI units, their
+ * mathjs's Unit class (made by its factory `createUnitClass` with number-only arithmetic,
+ * unit-numbers.ts, so that no BigNumber, fraction or complex library comes along) knows the SI units, their
  * prefixes, dimensions, conversion factors and the offsets of the temperature scales. On top of it
  * this file defines what a solution recipe adds:
  *
@@ -17,7 +18,22 @@
  * gallons, coulombs…), which are refused with a reason: "37 C" is 37 coulombs to mathjs, and here
  * "a temperature is written °C or degC".
  */
-import { create, UnitDependencies, type Unit } from "mathjs";
+import { createUnitClass, type Unit } from "mathjs";
+import { NUMBER_ONLY_UNIT_DEPENDENCIES } from "./unit-numbers";
+
+declare module "mathjs" {
+  /** mathjs's factory of its Unit class (exported by mathjs, absent from its published types). */
+  export function createUnitClass(dependencies: Record<string, unknown>): UnitClass;
+}
+
+/** The static side of mathjs's Unit class, as used here. */
+interface UnitClass {
+  new (value: number, unit: Unit | string): Unit;
+  parse(text: string): Unit;
+  isValuelessUnit(name: string): boolean;
+  createUnitSingle(name: string, definition: object): Unit;
+  readonly PREFIXES: Record<string, PrefixTable>;
+}
 
 /** mathjs's runtime shape of one factor of a unit (its published types say less). */
 interface Factor {
@@ -45,19 +61,17 @@ const TRADE_UNITS: ReadonlySet<string> = new Set([
 const UNITS_READ = "mol, g, L, m³, M, osmol, % w/v, K, °C, °F, with prefixes from f to k";
 
 /**
- * The mathjs instance with the trade's units. Made on first use, not when the add-in loads: making
- * mathjs's Unit class builds its typed scalar functions, about 0.2 s of CPU once (README,
- * Performance (d)), which a workbook of plain numbers never needs.
+ * mathjs's Unit class with the trade's units. Made on first use, not when the add-in loads: making
+ * it builds mathjs's table of units and prefixes, which a workbook of plain numbers never needs.
  */
 function makeUnitSystem() {
-  const math = create({ UnitDependencies }, { number: "number" });
-  const Unit = math.Unit;
-  const prefixTables = Unit.PREFIXES as unknown as Record<string, PrefixTable>;
+  const Unit = createUnitClass(NUMBER_ONLY_UNIT_DEPENDENCIES);
+  const prefixTables = Unit.PREFIXES;
   // The short SI prefixes from femto to kilo, taken from mathjs's table (a unit names its prefix set).
   prefixTables.RECIPE = Object.fromEntries(Object.entries(prefixTables.SHORT).filter(([, p]) => prefixRead(p.value)));
-  Unit.createUnitSingle("M", { definition: "1 mol/L", prefixes: "recipe" } as never);
-  Unit.createUnitSingle("osmol", { prefixes: "recipe", baseName: "OSMOTIC_AMOUNT" } as never);
-  Unit.createUnitSingle("percentwv", { definition: "10 g/L" } as never);
+  Unit.createUnitSingle("M", { definition: "1 mol/L", prefixes: "recipe" });
+  Unit.createUnitSingle("osmol", { prefixes: "recipe", baseName: "OSMOTIC_AMOUNT" });
+  Unit.createUnitSingle("percentwv", { definition: "10 g/L" });
   /** Reference units the read ones are compared with (by dimension) and converted to. */
   const ref = {
     molar: Unit.parse("mol/L"),
@@ -68,13 +82,13 @@ function makeUnitSystem() {
     mass: Unit.parse("g"),
     temperature: Unit.parse("degC"),
   } as const;
-  return { math, Unit, ref, prefixes: Object.keys(prefixTables.RECIPE) };
+  return { Unit, ref, prefixes: Object.keys(prefixTables.RECIPE) };
 }
 
 export type UnitSystem = ReturnType<typeof makeUnitSystem>;
 let made: UnitSystem | undefined;
 
-/** The mathjs instance with the trade's units (made once, on first use). */
+/** mathjs's Unit class with the trade's units (made once, on first use). */
 export function unitSystem(): UnitSystem {
   made ??= makeUnitSystem();
   return made;
@@ -179,12 +193,12 @@ const linearFactors = new WeakMap<Unit, Map<Unit, number>>();
  */
 export function convertTo(x: number, from: Unit, to: Unit): number {
   const UnitClass = unitSystem().Unit;
-  if (factorsOf(from).some(isTemperature)) return new UnitClass(x, from as never).toNumber(to as never);
+  if (factorsOf(from).some(isTemperature)) return new UnitClass(x, from).toNumber(to as never);
   let byRef = linearFactors.get(from);
   if (!byRef) linearFactors.set(from, (byRef = new Map()));
   let factor = byRef.get(to);
   if (factor === undefined) {
-    factor = new UnitClass(1, from as never).toNumber(to as never);
+    factor = new UnitClass(1, from).toNumber(to as never);
     byRef.set(to, factor);
   }
   return x * factor;

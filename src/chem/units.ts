@@ -8,7 +8,7 @@
  * needs the molar mass).
  *
  * The units themselves (symbols, SI prefixes, dimensions, factors, temperature offsets, and the
- * trade's M, osmol and % w/v) are defined once on a mathjs instance in unit-system.ts. This file
+ * trade's M, osmol and % w/v) are defined once on mathjs's Unit class in unit-system.ts. This file
  * reads the number, brings the spellings of degrees and percentages to one form, and says what is
  * refused and why: a molality (needs the solution's density), a bare "%" or "% w/w" (need a
  * density or a basis), "37 C" (coulombs to mathjs), a mistyped case ("25 mm"), a decimal comma.

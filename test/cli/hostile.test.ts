@@ -14,8 +14,9 @@ import { workbookBuffer } from "./support/workbook-with-library";
 
 let dir = "";
 beforeAll(() => {
-  requireBuild();
+  // the temporary directory first: files are written there even when the build is missing
   dir = mkdtempSync(join(tmpdir(), "protolyte-hostile-"));
+  requireBuild();
 });
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
 

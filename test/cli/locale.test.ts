@@ -11,8 +11,9 @@ import { requireBuild, run } from "./support/run";
 
 let dir = "";
 beforeAll(() => {
-  requireBuild();
+  // the temporary directory first: files are written there even when the build is missing
   dir = mkdtempSync(join(tmpdir(), "protolyte-locale-"));
+  requireBuild();
 });
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
 

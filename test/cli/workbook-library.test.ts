@@ -15,8 +15,9 @@ import { ADDIN_ID, addWebExtensions, storedSettingText, webExtensionPart, workbo
 
 let dir = "";
 beforeAll(() => {
-  requireBuild();
+  // the temporary directory first: files are written there even when the build is missing
   dir = mkdtempSync(join(tmpdir(), "protolyte-wblib-"));
+  requireBuild();
 });
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
 

@@ -39,6 +39,16 @@ describe("production build", () => {
     }
   });
 
+  test("functions.js has mathjs's Unit class but none of the number libraries its typed functions bring (README, Performance (d))", () => {
+    const js = read("functions.js");
+    expect(js).toContain("Invalid argument in Unit.parse"); // mathjs's Unit class does the units
+    // decimal.js, fraction.js, complex.js and typed-function, each by one of its own error messages:
+    // about 185 kB that units of plain numbers never use (src/chem/unit-numbers.ts)
+    const brought = { decimal: "[DecimalError]", fraction: "Division by Zero", complex: "Invalid Param", typed: "Unexpected type of argument" };
+    const found = Object.entries(brought).filter(([, text]) => js.includes(text)).map(([name]) => name);
+    expect(found).toEqual([]);
+  });
+
   test("the task pane page loads office.js before the functions and task pane bundles", () => {
     const html = read("taskpane.html");
     const office = html.indexOf("office.js");

@@ -61,6 +61,9 @@ describe("each rule has one home", () => {
   test("what counts as a number in text: src/chem/number-text.ts", () => {
     // a decimal pattern written as a regular expression (digits, optional point, digits)
     expect(copies(/\\d[+*]\\\.\??\\d|\[\\d\.\]\+|\[-\+\]\?\[\\d/, ["src/chem/number-text.ts"])).toEqual([]);
+    // and the looser shapes "\d+(?:\.\d+)?" and "\d[\d.,]*" (a number found inside longer text: compose
+    // it from UNSIGNED_DECIMAL_SOURCE instead)
+    expect(copies(/\\d\+\(\?:\\\.\\d|\\d\[\\d\./, ["src/chem/number-text.ts"])).toEqual([]);
   });
 
   test("how names pair with amounts: src/chem/name-amount-pairs.ts", () => {

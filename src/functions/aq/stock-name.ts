@@ -7,6 +7,7 @@
  * before the name).
  */
 import { reagentStock, glacialPercent, REAGENT_TABLE_TEMPERATURE_C, type ReagentStock } from "../../chem/reagents";
+import { readDecimal, UNSIGNED_DECIMAL_SOURCE } from "../../chem";
 import { quantity, type Cell } from "../args";
 import { AqError, badInput, orThrow } from "../errors";
 import { resolveComponent } from "../substances";
@@ -20,10 +21,18 @@ export interface NamedStock {
   reagent?: ReagentStock;
 }
 
-const TRAILING = /^(.*?\S)[\s,]*\(?\s*(\d[\d.,]*(?:e[-+]?\d+)?\s*[a-zµμ/]+(?:\/[a-z]+)?)\s*\)?$/i;
-const LEADING = /^(\d[\d.,]*(?:e[-+]?\d+)?\s*[a-zµμ/]+(?:\/[a-z]+)?)\s+(.*\S)$/i;
+/**
+ * A number as the name's concentration starts ("1", "0.5", ".5", "1e-3"; number-text.ts), with a
+ * decimal comma or a second point taken in too ("0,5 M", "1..2 M"), so that the concentration's
+ * reader says what is wrong with it.
+ */
+const NUMBER = String.raw`${UNSIGNED_DECIMAL_SOURCE}(?:[.,]\d+)*`;
+/** A concentration beside a name: a number and a unit ("1 M", "0.5 mol/L"). */
+const CONC = String.raw`${NUMBER}\s*[a-zµμ/]+(?:\/[a-z]+)?`;
+const TRAILING = new RegExp(String.raw`^(.*?\S)[\s,]*\(?\s*(${CONC})\s*\)?$`, "i");
+const LEADING = new RegExp(String.raw`^(${CONC})\s+(.*\S)$`, "i");
 /** A percentage with an optional basis: "37 %", "37 % w/w", "37 %(m/m)", "0.9 % w/v". */
-const PERCENT = String.raw`(\d+(?:\.\d+)?)\s*%\s*(?:\(?\s*([wmv])\s*\/\s*([wmv])\s*\)?)?`;
+const PERCENT = String.raw`(${UNSIGNED_DECIMAL_SOURCE})\s*%\s*(?:\(?\s*([wmv])\s*\/\s*([wmv])\s*\)?)?`;
 const TRAILING_PERCENT = new RegExp(String.raw`^(.*?\S)[\s,]*\(?\s*${PERCENT}\s*\)?$`, "i");
 const LEADING_PERCENT = new RegExp(String.raw`^${PERCENT}\s+(.*\S)$`, "i");
 const GLACIAL = /^glacial\s+(.*\S)$/i;
@@ -71,7 +80,7 @@ function readReagent(name: string, what: string): NamedStock | undefined {
   if (basis !== "" && basis !== "w/w" && basis !== "m/m") {
     throw badInput(`'${name}': only a percentage by mass ("% w/w", as concentrated reagents are sold) or "% w/v" is understood beside a name, not "% ${basis}"`);
   }
-  return asReagent(component, Number(m.percent));
+  return asReagent(component, readDecimal(m.percent) ?? NaN);
 }
 
 export function resolveWithStock(name: string, what: string): NamedStock {
