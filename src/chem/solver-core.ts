@@ -121,6 +121,30 @@ export class ChargeBalanceSolver {
     this.pMin = pMax - capacity;
   }
 
+  /**
+   * Other totals for the same systems and strong-ion charges (the next row of a what-if table,
+   * PreparedMixture.setMixture): the totals, the strong ions' sums and the bracket, computed as the
+   * constructor computes them. The constants stay, with their values at the last temperature; every
+   * solve starts cold, so the results are those of a solver made with these totals.
+   */
+  setTotals(totals: readonly number[], strongCharge: number, strongIonic: number, strongAbs: number): void {
+    const d = this.data;
+    const at = this.at;
+    let pMax = strongCharge;
+    let capacity = 0;
+    for (let s = 0; s < this.nSys; s++) {
+      const C = totals[s];
+      d[at.total + s] = C;
+      pMax += C * d[at.topCharge + s];
+      capacity += C * d[at.stepCount + s];
+    }
+    this.strongCharge = strongCharge;
+    this.strongIonic = strongIonic;
+    this.strongAbs = strongAbs;
+    this.pMax = pMax;
+    this.pMin = pMax - capacity;
+  }
+
   /** Total mol/L of system s. */
   total(s: number): number {
     return this.data[this.at.total + s];

@@ -93,14 +93,23 @@ function matrixOf(result: unknown): unknown[][] {
   return result as unknown[][];
 }
 
-/** Pads or cuts a table to the size HyperFormula reserved for it. */
-function fit(rows: unknown[][], size: ArraySize): unknown[][] {
-  const out: unknown[][] = [];
+/**
+ * The table at the size HyperFormula reserved for it (padded with "" or cut), its cells converted.
+ * `fresh`: the table was made by this very call (a row-wise table, rowwise.ts), so when it already
+ * has that size it is converted in place: a 200 000-row column copied row by row was 200 000 more
+ * arrays for the garbage collector.
+ */
+function fit(rows: unknown[][], size: ArraySize, fresh: boolean): unknown[][] {
+  if (fresh && rows.length === size.height && rows.every((row) => row.length === size.width)) {
+    for (const row of rows) for (let c = 0; c < row.length; c++) row[c] = toHyperFormulaScalar(row[c]);
+    return rows;
+  }
+  const out: unknown[][] = new Array(size.height);
   for (let r = 0; r < size.height; r++) {
     const row = rows[r] ?? [];
-    const cells: unknown[] = [];
-    for (let c = 0; c < size.width; c++) cells.push(toHyperFormulaScalar(row[c] ?? ""));
-    out.push(cells);
+    const cells: unknown[] = new Array(size.width);
+    for (let c = 0; c < size.width; c++) cells[c] = toHyperFormulaScalar(row[c] ?? "");
+    out[r] = cells;
   }
   return out;
 }
@@ -123,7 +132,7 @@ function buildPlugin(): typeof FunctionPlugin {
           const rows = matrixOf(result);
           if (entry.result === "column" && rows.length === 1 && rows[0].length === 1) return toHyperFormulaScalar(rows[0][0]);
           const size = sizeOf(rows);
-          return SimpleRangeValue.onlyValues(fit(rows, size) as never);
+          return SimpleRangeValue.onlyValues(fit(rows, size, entry.result === "column") as never);
         } catch (error) {
           return toHyperFormulaError(error);
         }

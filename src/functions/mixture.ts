@@ -11,7 +11,7 @@
  * NaN, ±Infinity, undefined and null apart (all "null") nor -0 from 0.
  */
 import { EMPTY_MIXTURE_MESSAGE, pairAt, pairShapeProblem, prepare, type PreparedMixture } from "../chem";
-import type { Component, Mixture } from "../chem/types";
+import type { Component, Failure, Mixture } from "../chem/types";
 import { cellsOf, isBlank, position, quantity, shapeOf, text, type Cell } from "./args";
 import { badInput, orThrow } from "./errors";
 import { libraryScoped, resolveComponent } from "./substances";
@@ -146,20 +146,31 @@ function read(names: Cell, amounts: Cell): MixtureArgs {
   return { mixture, prepared: orThrow(prepare(mixture)) };
 }
 
-/** A row of a table read in place by rowwise.ts (tableRowReader), handed to the row's function. */
-let handed: { names: Cell; amounts: Cell; value: MixtureArgs } | null = null;
+/**
+ * A row of a table read in place by rowwise.ts (tableRowReader), handed to the row's function: the
+ * names and amounts objects it was read from, and its mixture (module variables, not an object per row).
+ */
+let handedNames: Cell | undefined;
+let handedAmounts: Cell | undefined;
+let handedValue: MixtureArgs | null = null;
 
 /**
  * Calls fn(...args) while readMixtureArgs(names, amounts), for these very objects, answers `value` (read
  * already by tableRowReader); any other call reads as usual.
  */
 export function withRowMixture<A extends unknown[], T>(names: Cell, amounts: Cell, value: MixtureArgs, fn: (...args: A) => T, args: A): T {
-  const before = handed;
-  handed = { names, amounts, value };
+  const namesBefore = handedNames;
+  const amountsBefore = handedAmounts;
+  const valueBefore = handedValue;
+  handedNames = names;
+  handedAmounts = amounts;
+  handedValue = value;
   try {
     return fn(...args);
   } finally {
-    handed = before;
+    handedNames = namesBefore;
+    handedAmounts = amountsBefore;
+    handedValue = valueBefore;
   }
 }
 
@@ -168,8 +179,8 @@ export function withRowMixture<A extends unknown[], T>(names: Cell, amounts: Cel
  * are resolved once for the table, and a row of k plain finite non-negative numbers becomes its
  * mixture in place: the same entries, in the same order, that readEntries gives, prepared the same
  * way, without the cache key (a table of distinct rows never hits the cache, and the key was a
- * fifth of a row's cost: scripts/bench-tables.ts, f1). A row equal to the one before reuses its
- * mixture. Any other row (a blank, a unit, text, a failure to prepare) gives null: it is read the
+ * fifth of a row's cost: scripts/bench-tables.ts, f1), and solved by one solver for the table
+ * (PreparedMixture.setMixture). A row equal to the one before reuses its mixture. Any other row (a blank, a unit, text, a failure to prepare) gives null: it is read the
  * usual way, with its messages. Null when a name cell is not text.
  */
 export function tableRowReader(names: Cell): ((row: unknown) => MixtureArgs | null) | null {
@@ -192,9 +203,15 @@ export function tableRowReader(names: Cell): ((row: unknown) => MixtureArgs | nu
     if (last !== null && lastRow !== null && lastRow.every((v, c) => Object.is(v, row[c]))) return last;
     const mixture = new Array<{ component: Component; conc: number }>(k);
     for (let c = 0; c < k; c++) mixture[c] = { component: components[c], conc: row[c] as number };
-    const prepared = prepare(mixture);
-    if (!prepared.ok) return null;
-    lastRow = row.slice() as number[];
+    // The previous row's solver takes the new amounts where it can (the same components: always,
+    // unless complexes come or go); results are those of a new one (every solve starts cold).
+    let prepared: PreparedMixture | Failure;
+    if (last !== null && last.prepared.setMixture(mixture)) prepared = last.prepared;
+    else {
+      prepared = prepare(mixture);
+      if (!prepared.ok) return null;
+    }
+    lastRow = row as number[]; // the caller's row, unchanged while its table is read
     last = { mixture, prepared };
     return last;
   };
@@ -202,7 +219,7 @@ export function tableRowReader(names: Cell): ((row: unknown) => MixtureArgs | nu
 
 /** The mixture of a names/amounts pair, validated and prepared for solving (cached). */
 export function readMixtureArgs(names: Cell, amounts: Cell): MixtureArgs {
-  if (handed !== null && amounts === handed.amounts && names === handed.names) return handed.value;
+  if (handedValue !== null && amounts === handedAmounts && names === handedNames) return handedValue;
   const key = mixtureKey(names, amounts);
   if (key === null) return read(names, amounts);
   const cache = mixtureCache();

@@ -124,15 +124,18 @@ export function rowwise(impl: RowImplementation, names: Cell, amounts: Cell, ...
     const reader = amountRows === null ? null : tableRowReader(names);
     const fixed = rest.map((v, i) => (columns[i] === null ? single(v, i) : undefined));
     const out: unknown[][] = new Array(n);
-    // The call's arguments, filled in place per row (no spread, no closure per row).
+    // The call's arguments, filled in place per row (no spread, no closure per row); the row's
+    // amounts go in one 1-row range reused for every row (nothing keeps it beyond its row's call).
     const call: [Cell, Cell, ...Cell[]] = [names, amounts, ...fixed];
+    const oneRow: unknown[][] = [[]];
+    if (amountRows !== null) call[1] = oneRow;
     for (let r = 0; r < n; r++) {
       const blank = amountRows !== null ? rowIsBlank(amountRows[r]) : columns.every((col) => col === null || isBlank(col[r][0]));
       if (blank) {
         out[r] = [""];
         continue;
       }
-      if (amountRows !== null) call[1] = [amountRows[r]];
+      if (amountRows !== null) oneRow[0] = amountRows[r];
       for (let i = 0; i < rest.length; i++) if (columns[i] !== null) call[i + 2] = columns[i]![r][0];
       try {
         const read = reader === null ? null : reader(amountRows![r]);
