@@ -11,8 +11,8 @@ import { parseCsvText, toCellContent } from "./csv";
 import type { Workbook } from "./evaluate";
 import { checkCellCount, checkSheetSize, LimitError, LIMITS } from "./limits";
 import { readAddinSettings, workbookLibraryText } from "./workbook-library";
-import { longestText, textPartKind } from "./xlsx-text-limit";
-import { listZip, readZipEntry } from "./zip";
+import { textPartKind, XmlPartScanner } from "./xlsx-text-limit";
+import { listZip, streamZipEntry, type ZipEntry } from "./zip";
 
 export class InputError extends Error {}
 
@@ -91,8 +91,14 @@ function readCsv(buffer: Buffer, file: string, separator: string | undefined, no
   return new Map([["Sheet1", parsed.rows.map((row) => row.map((f) => toCellContent(f, decimalComma)))]]);
 }
 
-/** The package's declared sizes against the limit, then each part inflated with its declared size as a cap (a package that lies about its sizes is refused). */
-function checkPackage(buffer: Buffer, file: string) {
+/**
+ * The package before exceljs loads it, at low memory: its declared sizes against the limit, then
+ * every part inflated as a stream and held to its declared size (a package that lies about its sizes
+ * is refused), the XML of the worksheets and shared strings scanned as it passes (xlsx-text-limit.ts):
+ * a text longer than a cell holds, more rows than a sheet may have, or more cells than the sheets may
+ * span, and the inflation stops there with one line.
+ */
+async function checkPackage(buffer: Buffer, file: string): Promise<ZipEntry[]> {
   let entries;
   try {
     entries = listZip(buffer);
@@ -103,19 +109,27 @@ function checkPackage(buffer: Buffer, file: string) {
   if (declared > LIMITS.unpackedBytes) {
     throw new LimitError(`'${file}' unpacks to ${(declared / 2 ** 20).toFixed(0)} MB; at most ${LIMITS.unpackedBytes / 2 ** 20} MB are read`);
   }
+  let cellsBefore = 0; // <c> elements of the sheets scanned before this part
   for (const entry of entries) {
-    let bytes: Buffer;
+    const kind = textPartKind(entry.name);
+    const scan = kind === null ? null : new XmlPartScanner(kind === "shared");
     try {
-      bytes = readZipEntry(buffer, entry);
+      await streamZipEntry(buffer, entry, (bytes) => {
+        if (scan === null) return;
+        scan.write(bytes);
+        if (scan.longest > LIMITS.cellChars) {
+          throw new LimitError(`'${file}' holds a text of at least ${scan.longest} characters (${entry.name}); a cell holds at most ${LIMITS.cellChars}`);
+        }
+        if (scan.rows > LIMITS.rows) throw new LimitError(`'${file}' has a sheet of more than ${LIMITS.rows} rows (${entry.name}); at most ${LIMITS.rows} are read`);
+        if (cellsBefore + scan.cells > LIMITS.cells) {
+          throw new LimitError(`'${file}' holds more than ${LIMITS.cells} cells (counted in its sheets' XML before loading); at most ${LIMITS.cells} are evaluated`);
+        }
+      });
     } catch (e) {
+      if (e instanceof LimitError) throw e;
       throw new InputError(`'${file}' is not a readable XLSX workbook: part ${entry.name}: ${(e as Error).message}`);
     }
-    // Cell text beyond the limit is refused before the workbook is loaded (xlsx-text-limit.ts).
-    const kind = textPartKind(entry.name);
-    const longest = kind === null ? 0 : longestText(bytes, kind === "shared");
-    if (longest > LIMITS.cellChars) {
-      throw new LimitError(`'${file}' holds a text of at least ${longest} characters (${entry.name}); a cell holds at most ${LIMITS.cellChars}`);
-    }
+    cellsBefore += scan?.cells ?? 0;
   }
   return entries;
 }
@@ -142,7 +156,7 @@ export async function loadInput(file: string, options: { separator?: string; wor
   if (startsWith(buffer, [0xd0, 0xcf, 0x11, 0xe0])) throw new InputError(`'${file}' is an Excel 97–2003 (.xls) file or another OLE document; save it as .xlsx`);
   if (zip) {
     if (ext !== ".xlsx" && ext !== ".xlsm") notes.push(`'${file}' is an XLSX workbook by its content: read as one`);
-    const entries = checkPackage(buffer, file);
+    const entries = await checkPackage(buffer, file);
     const { readWorkbookBuffer } = await import("./xlsx");
     const sheets = await readWorkbookBuffer(buffer);
     checkSheets(sheets);

@@ -1,13 +1,17 @@
 /**
- * The longest cell text an XLSX package holds, read from its XML parts before the workbook is
- * loaded, so that a package with a 100 MB cell is refused before exceljs builds that string (and
- * the objects around it). Counted on the inflated bytes without decoding them: characters of text
- * between tags, UTF-8 continuation bytes not counted, an entity (&amp; &#233;) one character. A
- * shared string (<si>) is the sum of its runs (rich text is split into <r><t> pieces); in a
- * worksheet each text node is counted alone (an inline string, a formula, a value). Where a count
- * can only be lower than the text's length in the cell (a character outside the Basic Multilingual
- * Plane counts one here, two in a cell), so a package refused here is over the limit for certain;
- * the exact check runs again on the loaded cells.
+ * What an XLSX package's XML parts hold, read from the inflated bytes as they stream past, before the
+ * workbook is loaded: the longest cell text (so that a package with a 100 MB cell is refused before
+ * exceljs builds that string and the objects around it), and the number of cells and rows of a
+ * worksheet (so that a package that would load millions of cells is refused at low memory).
+ *
+ * Counted on the bytes without decoding them: characters of text between tags, UTF-8 continuation
+ * bytes not counted, an entity (&amp; &#233;) one character. A shared string (<si>) is the sum of its
+ * runs (rich text is split into <r><t> pieces); in a worksheet each text node is counted alone (an
+ * inline string, a formula, a value). Cells are the <c> elements, rows the <row> elements (a
+ * namespace prefix such as <x:c> is allowed). Each count can only be lower than what the loaded
+ * workbook gives (a character outside the Basic Multilingual Plane counts one here, two in a cell;
+ * every <c> is a distinct cell inside the rectangle the limits count), so a package refused here is
+ * over the limit for certain; the exact checks run again on the loaded cells.
  */
 
 const LT = 0x3c; // <
@@ -15,49 +19,101 @@ const GT = 0x3e; // >
 const AMP = 0x26; // &
 const SEMI = 0x3b; // ;
 const SLASH = 0x2f; // /
+const COLON = 0x3a; // :
 
-/** True when the tag starting after '<' at `i` is named `si` (opening or closing). */
-function isSharedStringTag(xml: Buffer, i: number): boolean {
-  let j = i + 1;
-  if (xml[j] === SLASH) j++;
-  if (xml[j] !== 0x73 || xml[j + 1] !== 0x69) return false; // "si"
-  const after = xml[j + 2];
-  return after === GT || after === SLASH || after === 0x20 || after === 0x09 || after === 0x0a || after === 0x0d;
+/** Tag names as the bytes of their (up to four) letters. */
+const SI = (0x73 << 8) | 0x69;
+const C = 0x63;
+const ROW = (0x72 << 16) | (0x6f << 8) | 0x77;
+
+/** The byte ends a tag's name: blank, '>' or '/'. */
+const endsName = (b: number): boolean => b === GT || b === SLASH || b === 0x20 || b === 0x09 || b === 0x0a || b === 0x0d;
+
+/** Scans one XML part given in chunks (any split, even inside a tag or a character). */
+export class XmlPartScanner {
+  /** The longest text so far (characters, as counted above). */
+  longest = 0;
+  /** <c> elements so far (worksheets only). */
+  cells = 0;
+  /** <row> elements so far (worksheets only). */
+  rows = 0;
+  private current = 0;
+  private inTag = false;
+  private inEntity = false;
+  /** Reading the name of the current tag: its letters so far, how many, and whether it closes. */
+  private naming = false;
+  private name = 0;
+  private nameLength = 0;
+  private closing = false;
+
+  /** `sharedStrings`: sum the text of each <si> element; otherwise each text node alone. */
+  constructor(private readonly sharedStrings: boolean) {}
+
+  write(xml: Uint8Array): void {
+    const shared = this.sharedStrings;
+    let { longest, current, inTag, inEntity, naming, name, nameLength, closing } = this;
+    for (let i = 0; i < xml.length; i++) {
+      const b = xml[i]!;
+      if (inTag) {
+        if (naming) {
+          if (nameLength === 0 && b === SLASH && !closing) closing = true;
+          else if (b === COLON) {
+            name = 0; // a namespace prefix: the name follows
+            nameLength = 0;
+          } else if (!endsName(b)) {
+            if (nameLength < 4) name = name * 256 + b;
+            nameLength++;
+          } else {
+            naming = false;
+            if (shared) {
+              if (nameLength === 2 && name === SI) current = 0;
+            } else if (!closing) {
+              if (nameLength === 1 && name === C) this.cells++;
+              else if (nameLength === 3 && name === ROW) this.rows++;
+            }
+          }
+        }
+        if (b === GT) inTag = false;
+        continue;
+      }
+      if (b === LT) {
+        inTag = true;
+        naming = true;
+        name = 0;
+        nameLength = 0;
+        closing = false;
+        if (current > longest) longest = current;
+        if (!shared) current = 0;
+        continue;
+      }
+      if (inEntity) {
+        if (b === SEMI) inEntity = false;
+        continue;
+      }
+      if (b === AMP) {
+        inEntity = true;
+        current++;
+        continue;
+      }
+      if ((b & 0xc0) !== 0x80) current++; // not a UTF-8 continuation byte
+    }
+    if (current > longest) longest = current;
+    this.longest = longest;
+    this.current = current;
+    this.inTag = inTag;
+    this.inEntity = inEntity;
+    this.naming = naming;
+    this.name = name;
+    this.nameLength = nameLength;
+    this.closing = closing;
+  }
 }
 
-/**
- * The largest text length found in one XML part (characters, as counted above). `sharedStrings`:
- * sum the text of each <si> element; otherwise each text node alone.
- */
+/** The largest text length found in one whole XML part (see XmlPartScanner). */
 export function longestText(xml: Buffer, sharedStrings: boolean): number {
-  let longest = 0;
-  let current = 0;
-  let inTag = false;
-  let inEntity = false;
-  for (let i = 0; i < xml.length; i++) {
-    const b = xml[i]!;
-    if (inTag) {
-      if (b === GT) inTag = false;
-      continue;
-    }
-    if (b === LT) {
-      inTag = true;
-      if (current > longest) longest = current;
-      if (!sharedStrings || isSharedStringTag(xml, i)) current = 0;
-      continue;
-    }
-    if (inEntity) {
-      if (b === SEMI) inEntity = false;
-      continue;
-    }
-    if (b === AMP) {
-      inEntity = true;
-      current++;
-      continue;
-    }
-    if ((b & 0xc0) !== 0x80) current++; // not a UTF-8 continuation byte
-  }
-  return Math.max(longest, current);
+  const scanner = new XmlPartScanner(sharedStrings);
+  scanner.write(xml);
+  return scanner.longest;
 }
 
 /** Whether a part of the package holds cell text: the shared strings or a worksheet. */

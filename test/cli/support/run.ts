@@ -19,8 +19,9 @@ export interface Run {
   err: string;
 }
 
-export function run(args: string[], options: { cwd?: string; input?: string | Buffer } = {}): Run {
-  const r = spawnSync(process.execPath, [compiled, ...args], { cwd: options.cwd ?? root, encoding: "utf8", input: options.input, maxBuffer: 256 * 1024 * 1024 });
+/** `node`: options for Node itself (e.g. a heap limit), placed before the program. */
+export function run(args: string[], options: { cwd?: string; input?: string | Buffer; node?: string[] } = {}): Run {
+  const r = spawnSync(process.execPath, [...(options.node ?? []), compiled, ...args], { cwd: options.cwd ?? root, encoding: "utf8", input: options.input, maxBuffer: 256 * 1024 * 1024 });
   return { code: r.status, out: r.stdout, err: r.stderr };
 }
 
