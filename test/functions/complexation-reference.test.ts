@@ -29,15 +29,16 @@ describe("published values with the library's complexes", () => {
     expectReference(solved(c.mixture, c.temperatureC).pH, c, `pH ${c.label}`);
   });
 
-  test.each(casesOf("calcium-citrate-k"))("$id: free calcium in citrate, conditional log K $printed", (c) => {
+  test.each(casesOf("calcium-citrate-k"))("$id: free calcium in citrate, conditional log K $expected", (c) => {
     const eq = solved(c.mixture, c.temperatureC);
     const conc = (name: string | undefined) => {
       const sp = eq.species.find((s) => s.name === name);
       if (!sp) throw new Error(`no species ${name}`);
       return sp.conc;
     };
-    expect(eq.ionicStrength).toBeGreaterThan(0.09);
-    expect(eq.ionicStrength).toBeLessThan(0.12);
+    // the mixture is made up to the ionic strength the published constant belongs to
+    if (c.ionicStrength === undefined) throw new Error(`${c.id}: no ionicStrength`);
+    expect(Math.abs(eq.ionicStrength / c.ionicStrength - 1)).toBeLessThan(0.1);
     expectReference(Math.log10(conc(c.complex) / (conc(c.metalIon) * conc(c.ligand))), c, `log K′ ${c.label}`);
   });
 

@@ -62,6 +62,8 @@ export interface ReferenceCase {
   complex?: string;
   ligand?: string;
   metalIon?: string;
+  /** log-conditional-K cases: the ionic strength (mol/L) the constant belongs to; the mixture must come within 10 % of it. */
+  ionicStrength?: number;
 }
 
 export interface ReferenceTable {
