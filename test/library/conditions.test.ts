@@ -154,6 +154,10 @@ describe("the file format", () => {
     expect(noDH.ok ? "" : noDH.errors[0].message).toMatch(/no ΔrH°/);
     const onDH = validateLibraryDoc(layer(c.value, MEASURED, { dH: { ...DH, measured: MEASURED } }), ctx);
     expect(onDH.ok ? [] : onDH.errors.map((e) => e.path)).toContain("systems[0].steps[0].dH.measured");
+    // refused with the reason, for each kind of value that is not converted
+    expect(onDH.ok ? "" : onDH.errors.find((e) => e.path.endsWith("dH.measured"))?.message).toMatch(/^measured conditions cannot be converted here: a ΔrH° is used as entered, for 25 °C and I = 0; .*ΔrCp°.*Enter the value for 25 °C, I = 0/);
+    const onDCp = validateLibraryDoc(layer(c.value, MEASURED, { dH: DH, dCp: { value: -40, unit: "J/(K·mol)", conditions: "25 °C", status: "entered", measured: MEASURED } }), ctx);
+    expect(onDCp.ok ? "" : onDCp.errors.find((e) => e.path.endsWith("dCp.measured"))?.message).toMatch(/ΔrCp° is used as entered and taken as constant/);
     const badScale = layer(c.value, { ...MEASURED, scale: "activity" as "mixed" });
     expect(validateLibraryDoc(badScale, ctx).ok).toBe(false);
   });

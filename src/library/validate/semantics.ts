@@ -44,11 +44,27 @@ export function worldOf(docs: readonly LibraryDoc[]): World {
   return { sources, systems, ions, elements, atomicWeights };
 }
 
+/**
+ * Why measured conditions are refused on a value other than a pKa: it is used as entered, at 25 °C
+ * and I = 0, and the engine has no model that would convert it (conditions.ts converts a pKa only).
+ */
+const NOT_CONVERTED: Record<string, string> = {
+  dH: "a ΔrH° is used as entered, for 25 °C and I = 0; moving one measured elsewhere to 25 °C would need ΔrCp° over that range, and to I = 0 the temperature derivative of the activity model, neither of which the engine applies to ΔrH°",
+  dCp: "a ΔrCp° is used as entered and taken as constant with temperature; the engine has nothing to convert it with",
+  logBeta: "a log β is used as entered, for 25 °C and I = 0; its activity term would need the charges of the metal, the ligand and the complex together, which the conversion of a pKa does not cover",
+  logKsp: "a log Ksp is used as entered, for 25 °C and I = 0; the conversion covers a pKa only",
+  molarMass: "a molar mass or atomic weight does not depend on temperature or ionic strength",
+};
+
 function checkValue(v: ValueRecord | undefined, path: string, world: World, out: SemanticIssue[], pKa = false): void {
   if (v?.source !== undefined && !world.sources.has(v.source)) {
     out.push({ path: childPath(path, "source"), message: `unknown source '${v.source}' (add it to sources)`, reference: true });
   }
-  if (v?.measured !== undefined && !pKa) out.push({ path: childPath(path, "measured"), message: "only a pKa is converted from measured conditions" });
+  if (v?.measured !== undefined && !pKa) {
+    const key = path.startsWith("atomicWeights") ? "molarMass" : path.slice(path.lastIndexOf(".") + 1);
+    const why = NOT_CONVERTED[key] ?? "only a pKa is converted from measured conditions";
+    out.push({ path: childPath(path, "measured"), message: `measured conditions cannot be converted here: ${why}. Enter the value for 25 °C, I = 0 (its conditions as text), or leave the measured conditions off` });
+  }
 }
 
 /** A pKa with measured conditions must hold their conversion to 25 °C, I = 0 (conditions.ts). */
