@@ -17,7 +17,9 @@ import path from "node:path";
 // Problems in words naming the entry (validate/words.ts, moved down from the pane so that an
 // imported file and the command line say them the same way) about 1.5 KB (163.2 KB measured then).
 // Malate's pK, ΔrH° and ΔrCp° from Eden & Bates and maleate pK1, with their sources, about 1.6 KB.
-const LIBRARY_BUDGET_BYTES = 166 * 1024;
+// The reasons measured conditions are refused on values that are not converted, about 0.8 KB
+// (166.7 KB measured with them).
+const LIBRARY_BUDGET_BYTES = 167 * 1024;
 
 const bundle = (entry: string) =>
   buildSync({
