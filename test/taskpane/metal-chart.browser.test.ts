@@ -2,7 +2,8 @@
  * The Picture view's metal distribution in headless Chromium (Debian's /usr/bin/chromium through
  * playwright-core), outside Office, at the pane's width (350 px): calcium in a citrate buffer entered
  * in Try it is drawn free and in each complex against pH, beside the citrate diagram, fitting the
- * pane, with its numbers as text, within the Content-Security-Policy. Screenshot:
+ * pane, with its numbers as text, within the Content-Security-Policy; Browse writes the metal's charge
+ * the same way. Screenshot:
  * test-artifacts/pane-metal-distribution.png.
  */
 import * as fs from "fs";
@@ -119,6 +120,16 @@ describe("Picture view: a metal's distribution in Chromium at the pane's width",
     expect(table).toMatch(/CaCit⁻\s+\d+ %/);
     expect(table).toMatch(/Half of Ca²⁺ free\s+pH \d\.\d\d/);
     expect(await fig.locator("details summary").innerText()).toBe("Numbers for Ca²⁺ (4.00 mmol/L in all)");
+  });
+
+  test("Browse writes a metal ion's charge as the charts do: calcium chloride dihydrate carries 1 × Ca²⁺", async () => {
+    await page.getByRole("tab", { name: "Browse" }).click();
+    await page.fill("#search", "calcium chloride dihydrate");
+    const item = page.locator('#entries li[data-kind="substance"][data-id="calcium-chloride-dihydrate"]');
+    if ((await item.locator(".entry-head").getAttribute("aria-expanded")) !== "true") await item.locator(".entry-head").click();
+    const text = await item.innerText();
+    expect(text).toContain("1 × Ca²⁺");
+    expect(text).toContain("2 × Cl⁻");
   });
 
   test("a mixture without a complexing metal draws no metal picture", async () => {

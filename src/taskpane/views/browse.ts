@@ -119,7 +119,10 @@ export class BrowseView {
       if (!resolved.ok) facts.push(["cannot be used", resolved.message]);
       facts.push(["kind", r.nature.replace(/-/g, " ")]);
       for (const s of r.systems ?? []) facts.push(["system", `${s.stoich} × ${this.ctl.library.get(s.system, "system") ? (this.ctl.library.get(s.system, "system")!.record as SystemRecord).name : s.system}, carrying ${s.protons} dissociable H⁺`]);
-      for (const s of r.ions ?? []) facts.push(["ion", `${s.stoich} × ${displayName((this.ctl.library.get(s.ion, "ion")?.record as IonRecord | undefined)?.formula ?? s.ion)}`]);
+      for (const s of r.ions ?? []) {
+        const ion = this.ctl.library.get(s.ion, "ion")?.record as IonRecord | undefined;
+        facts.push(["ion", `${s.stoich} × ${displayName(ion?.formula ?? s.ion, ion?.charge)}`]);
+      }
       if (r.neutral) facts.push(["neutral particles", String(r.neutral)]);
       if (r.freeH) facts.push(["H⁺ released", String(r.freeH)]);
       if (r.freeOH) facts.push(["OH⁻ released", String(r.freeOH)]);
