@@ -116,9 +116,14 @@ export function longestText(xml: Buffer, sharedStrings: boolean): number {
   return scanner.longest;
 }
 
-/** Whether a part of the package holds cell text: the shared strings or a worksheet. */
+/**
+ * Whether a part of the package holds cells: the shared strings or a worksheet. exceljs takes as a
+ * worksheet any part whose name contains "xl/worksheets/sheetN.xml" (its pattern is not anchored:
+ * "a/xl/worksheets/sheet1.xml" and "xl/worksheets/sheet1.xml.bak" load as sheets too), so every name
+ * containing "xl/worksheets/….xml" is scanned here.
+ */
 export function textPartKind(name: string): "shared" | "sheet" | null {
   if (/^xl\/sharedStrings\d*\.xml$/i.test(name)) return "shared";
-  if (/^xl\/worksheets\/[^/]+\.xml$/i.test(name)) return "sheet";
+  if (/xl\/worksheets\/[^/]+\.xml/i.test(name) && !/\.rels$/i.test(name)) return "sheet";
   return null;
 }

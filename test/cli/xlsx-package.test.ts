@@ -72,6 +72,14 @@ test("more rows than the limit: refused from the sheet's XML before loading", as
   expectRefused(packageWith(sheet, "many-rows.xlsx"), new RegExp(`has a sheet of more than ${LIMITS.rows} rows \\(xl/worksheets/sheet1\\.xml\\)`));
 });
 
+test("a sheet hidden under another folder, which exceljs loads as a sheet all the same, is counted as well", async () => {
+  const parts = new Map(base);
+  parts.set("a/xl/worksheets/sheet9.xml", await deflatedRepeat(HEAD, row(1), LIMITS.rows + 1, TAIL));
+  const file = join(dir, "hidden-sheet.xlsx");
+  writeFileSync(file, writeParts(parts));
+  expectRefused(file, /has a sheet of more than 200000 rows \(a\/xl\/worksheets\/sheet9\.xml\)/);
+});
+
 test("a sheet written with a namespace prefix (<x:row>, <x:c>) is counted as well", async () => {
   const sheet = await deflatedRepeat(HEAD, "<x:row><x:c><x:v>1</x:v></x:c></x:row>", LIMITS.rows + 1, TAIL);
   expectRefused(packageWith(sheet, "prefixed.xlsx"), /has a sheet of more than 200000 rows/);

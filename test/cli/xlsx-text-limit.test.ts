@@ -21,5 +21,8 @@ test("the parts that hold cell text", () => {
   expect(textPartKind("xl/sharedStrings.xml")).toBe("shared");
   expect(textPartKind("xl/worksheets/sheet12.xml")).toBe("sheet");
   expect(textPartKind("xl/worksheets/_rels/sheet1.xml.rels")).toBeNull();
+  // Names exceljs also loads as worksheets (its pattern is not anchored).
+  expect(textPartKind("a/xl/worksheets/sheet1.xml")).toBe("sheet");
+  expect(textPartKind("xl/worksheets/sheet2.xml.bak")).toBe("sheet");
   expect(textPartKind("xl/styles.xml")).toBeNull();
 });
