@@ -26,7 +26,7 @@ export type {
 export { DEFAULTS, SOLVER, LIMITS } from "./defaults";
 export { solveEquilibrium, solvePH } from "./solve-mixture";
 export { prepare, PreparedMixture } from "./prepared";
-export type { MetalDistribution, MetalForm } from "./metal-distribution";
+export type { MetalDistribution, MetalForm, LigandDistribution, LigandForm } from "./metal-distribution";
 export { pKw, kw, pKwMarshallFranck, pKwIapws2006 } from "./water";
 export { waterDensity } from "./water-density";
 export { pKaAtTemperature, thermodynamicPKa } from "./temperature";

@@ -19,7 +19,7 @@ import { ComplexingSolver } from "./complex-solver";
 import { ACTIVITY_MODELS } from "./activity/models";
 import { PitzerState, pitzerBufferValue, solvePitzer } from "./pitzer-iteration";
 import { bufferValue } from "./beta";
-import { metalDistributionOf, type MetalDistribution } from "./metal-distribution";
+import { ligandDistributionOf, metalDistributionOf, type LigandDistribution, type MetalDistribution } from "./metal-distribution";
 
 /** Σ z·c, ½ Σ z²·c and Σ |z|·c of the strong ions. */
 function strongSums(agg: Aggregate): [number, number, number] {
@@ -157,6 +157,11 @@ export class PreparedMixture {
    */
   metalDistribution(pH: readonly number[]): MetalDistribution[] {
     return this.core instanceof ComplexingSolver ? metalDistributionOf(this.core, this.aggregate, pH) : [];
+  }
+
+  /** After a solve: each system that forms complexes here, free forms and complexes as shares of its total, over those pH values; [] without one. */
+  ligandDistribution(pH: readonly number[]): LigandDistribution[] {
+    return this.core instanceof ComplexingSolver ? ligandDistributionOf(this.core, this.aggregate, pH) : [];
   }
 
   /** Fast path: pH, p[H] and ionic strength only ("beyond-limit" as solve). */

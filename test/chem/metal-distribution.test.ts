@@ -77,11 +77,30 @@ describe("a metal's distribution against pH", () => {
     expect(m.forms[0].fractions[0]).toBeLessThan(0.1);
   });
 
+  test("the ligand's side: citrate free and bound as shares of its total sum to 1 at every pH, and equal the solved fractions at the mixture's pH", () => {
+    const { p, eq } = solved(MIX);
+    const [l] = p.ligandDistribution([...AXIS, eq.pH]);
+    expect(l.systemId).toBe("citrate");
+    expect(l.forms.map((f) => f.name).slice(-2)).toEqual(["CaCit-", "CaHCit"]);
+    for (let i = 0; i <= AXIS.length; i++) {
+      const sum = l.forms.reduce((s, f) => s + f.fractions[i], 0);
+      expect({ i, sum: Math.abs(sum - 1) < 1e-9 }).toEqual({ i, sum: true });
+    }
+    for (const f of l.forms) {
+      const sp = eq.species.find((s) => s.systemId === "citrate" && s.name === f.name)!;
+      expect(Math.abs(f.fractions[AXIS.length] - sp.fraction)).toBeLessThan(1e-9);
+    }
+    // bound citrate at the mixture's pH: the calcium bound, out of 10 mmol/L citrate
+    const boundCa = p.metalDistribution([eq.pH])[0].forms.slice(1).reduce((s, f) => s + f.fractions[0], 0) * 0.004;
+    expect(Math.abs((l.forms[4].atMixture + l.forms[5].atMixture) * 0.01 - boundCa)).toBeLessThan(1e-12);
+  });
+
   test("a mixture whose metal forms no complex here, or without complexes, has no distribution", () => {
     const plain: Mixture = [
       { component: { ...na3cit, systems: [{ system: citrate, stoich: 1 }] }, conc: 0.01 },
       { component: cacl2, conc: 0.004 },
     ];
     expect(solved(plain).p.metalDistribution(AXIS)).toEqual([]);
+    expect(solved(plain).p.ligandDistribution(AXIS)).toEqual([]);
   });
 });

@@ -85,6 +85,8 @@ describe("Picture view: a metal's distribution in Chromium at the pane's width",
     await page.getByRole("tab", { name: "Picture" }).click();
     await waitForText(page.locator("#picture-source"), /^From the Try it mixture: 10 mM trisodium citrate dihydrate \+ 4 mM calcium chloride dihydrate, 25 °C\.$/);
     expect(await page.locator("#picture-speciation svg.speciation").evaluateAll((s) => s.map((e) => e.getAttribute("data-system")))).toEqual(["citrate"]);
+    // the citrate diagram shows its bound share too
+    expect(await page.locator("#picture-speciation svg.speciation path.species-line").evaluateAll((ps) => ps.map((p) => p.getAttribute("data-species")))).toEqual(expect.arrayContaining(["Cit^3-", "CaCit-"]));
     const svg = page.locator("#picture-speciation svg.metal-distribution");
     expect(await svg.count()).toBe(1);
     expect(await svg.getAttribute("data-metal")).toBe("ca");
@@ -110,6 +112,7 @@ describe("Picture view: a metal's distribution in Chromium at the pane's width",
     expectApartAndInside("legend", await boxes(svg.locator(".legend-item")), frame);
     expectApartAndInside("marker label", await boxes(svg.locator(".mixture-ph text")), frame);
     await page.locator('#picture-speciation figure[data-metal="ca"]').screenshot({ path: path.join(ARTIFACTS, "pane-metal-distribution.png") });
+    await page.locator('#picture-speciation figure[data-system="citrate"]').screenshot({ path: path.join(ARTIFACTS, "pane-citrate-with-calcium.png") });
   });
 
   test("its numbers as text: the free ion and the complexes at the mixture's pH, and where half is free", async () => {

@@ -3,6 +3,7 @@
  * complexing solver for a metal that forms complexes (calcium in a citrate buffer, the library's
  * constants), and its SVG on the small stand-in DOM.
  */
+import { solveEquilibrium } from "../../src/chem";
 import { getActiveLibrary, resetActiveLibrary } from "../../src/library";
 import { displayName } from "../../src/taskpane/charts/palette";
 import { speciation, type SpeciationData } from "../../src/taskpane/charts/speciation";
@@ -51,6 +52,36 @@ describe("metal distribution in the Picture view's data", () => {
     expect(half).not.toBeNull();
     expect(half!).toBeGreaterThan(3);
     expect(half!).toBeLessThan(d.mixturePH);
+  });
+
+  test("the citrate diagram shows the citrate bound to calcium: its shares sum to 1 at every pH, CaCit⁻ among them", () => {
+    const d = spec(CA_CITRATE);
+    const cit = d.systems.find((s) => s.id === "citrate")!;
+    expect(cit.species.map((s) => s.name)).toEqual(expect.arrayContaining(["Cit^3-", "CaCit-", "CaHCit"]));
+    for (let i = 0; i < d.pH.length; i += 10) {
+      const sum = cit.species.reduce((s, f) => s + f.fractions[i], 0);
+      expect({ pH: d.pH[i], off: Math.abs(sum - 1) < 1e-9 }).toEqual({ pH: d.pH[i], off: true });
+    }
+    // 4 mM calcium, mostly bound, on 10 mM citrate: CaCit⁻ is about a third of the citrate at the mixture's pH
+    const caCit = cit.species.find((s) => s.name === "CaCit-")!;
+    expect(caCit.atMixture).toBeGreaterThan(0.3);
+    expect(caCit.atMixture).toBeLessThan(0.4);
+    expect(caCit.ligands).toBe(1);
+  });
+
+  test("borax: the borate diagram shows triborate, counted three borons each (its mol/L is share × total / 3)", () => {
+    const d = spec([{ name: "borax", amount: "10 mM" }]);
+    const b = d.systems.find((s) => s.id === "borate")!;
+    const tri = b.species.find((s) => s.name === "B3O3(OH)4-")!;
+    expect(tri.ligands).toBe(3);
+    const m = parsePaneMixture(getActiveLibrary(), [{ name: "borax", amount: "10 mM" }], "25");
+    if (!m.ok) throw new Error("borax");
+    const eq = solveEquilibrium(m.mix, { temperatureC: 25 });
+    if (!eq.ok) throw new Error(eq.message);
+    const conc = eq.species.find((s) => s.name === "B3O3(OH)4-")!.conc;
+    expect(Math.abs((tri.atMixture * b.total) / 3 - conc) / conc).toBeLessThan(1e-9);
+    expect(b.total).toBeCloseTo(0.04, 12);
+    expect(d.metals).toEqual([]);
   });
 
   test("a mixture without a complexing metal has no metal picture", () => {

@@ -14,6 +14,13 @@
  * curves at the ends would show the model's failure rather than the system. The fraction formulas
  * at fixed conditions give the exact picture of "this system, these conditions, that pH", and at the
  * mixture's own pH they coincide with the solved speciation (test/taskpane/charts.test.ts).
+ *
+ * A metal ion that forms complexes in the mixture (Ca²⁺ with citrate, …) gets its own distribution:
+ * free and in each complex, as shares of the metal's total, from chem's complexing solver at each
+ * pH of the same axis, the same temperature and ionic strength (chem: PreparedMixture.metalDistribution).
+ * A system that forms complexes here (citrate with calcium, borate with its polyborates) is drawn the
+ * same way (PreparedMixture.ligandDistribution): its free forms and its complexes as shares of its
+ * total (a complex of l ligands counts l times), so the bound share shows; its crossings stay pK′.
  */
 import { apparentPKa, debyeHuckelA, log10Gamma, prepare, DEFAULTS } from "../../chem";
 import type { AcidBaseSystem, ActivityModel, Failure, MetalDistribution, Mixture, Regime } from "../../chem";
@@ -31,6 +38,8 @@ export interface SpeciesCurve {
   fractions: number[];
   /** Fraction at the mixture's own pH. */
   atMixture: number;
+  /** A complex's number of ligands (its mol/L is fraction × total / ligands); absent for a free form. */
+  ligands?: number;
 }
 
 export interface SystemSpeciation {
@@ -94,6 +103,7 @@ export function speciation(mix: Mixture, opts: SpeciationOptions = {}): Speciati
   const axis = Array.from({ length: n + 1 }, (_, i) => (i === n ? SPECIATION_PH_MAX : SPECIATION_PH_MIN + i * step));
   const eqNames = new Map<string, string[]>();
   for (const sp of eq.species) if (sp.systemId) eqNames.set(sp.systemId, [...(eqNames.get(sp.systemId) ?? []), sp.name]);
+  const bound = new Map(p.ligandDistribution(axis).map((l) => [l.systemId, l.forms]));
   const systems: SystemSpeciation[] = [];
   const { systems: list, totals } = p.aggregate;
   for (let s = 0; s < list.length; s++) {
@@ -104,13 +114,16 @@ export function speciation(mix: Mixture, opts: SpeciationOptions = {}): Speciati
       if (!r.ok) return r;
       pKs.push(r.value);
     }
-    const columns = axis.map((x) => fractionsAt(pKs, x + log10GammaH));
-    const here = fractionsAt(pKs, eq.pH + log10GammaH);
+    const forms = bound.get(sys.id);
+    const columns = forms ? [] : axis.map((x) => fractionsAt(pKs, x + log10GammaH));
+    const here = forms ? [] : fractionsAt(pKs, eq.pH + log10GammaH);
     systems.push({
       id: sys.id,
       name: sys.name,
       total: totals[s],
-      species: here.map((atMixture, k) => ({ name: speciesName(sys, k, eqNames), charge: sys.topCharge - k, fractions: columns.map((c) => c[k]), atMixture })),
+      species: forms
+        ? forms.map((f, k) => ({ name: f.name, charge: f.charge, fractions: f.fractions, atMixture: f.atMixture, ...(k > sys.steps.length ? { ligands: f.ligands } : {}) }))
+        : here.map((atMixture, k) => ({ name: speciesName(sys, k, eqNames), charge: sys.topCharge - k, fractions: columns.map((c) => c[k]), atMixture })),
       crossings: pKs.map((pK) => pK - log10GammaH),
     });
   }

@@ -19,7 +19,7 @@ function numbers(summary: string, table: HTMLTableElement): HTMLElement {
 function speciesTable(sys: SystemSpeciation, d: SpeciationData): HTMLTableElement {
   const head = el("tr", {}, el("th", { scope: "col" }, "Form"), el("th", { scope: "col" }, `At pH ${d.mixturePH.toFixed(2)}`), el("th", { scope: "col" }, "mol/L"));
   const rows = sys.species.map((s) =>
-    el("tr", {}, el("th", { scope: "row" }, displayName(s.name)), el("td", {}, pct(s.atMixture)), el("td", {}, (s.atMixture * sys.total).toPrecision(3))),
+    el("tr", {}, el("th", { scope: "row" }, displayName(s.name)), el("td", {}, pct(s.atMixture)), el("td", {}, ((s.atMixture * sys.total) / (s.ligands ?? 1)).toPrecision(3))),
   );
   const cross = sys.crossings.map((c, j) =>
     el("tr", { class: "crossing" }, el("th", { scope: "row" }, `${displayName(sys.species[j].name)} = ${displayName(sys.species[j + 1].name)}`), el("td", { colspan: 2 }, `pH ${c.toFixed(2)}`)),
