@@ -18,7 +18,7 @@ import { routeOffice, ROOT } from "./support/browser";
 import { waitForText } from "./support/page-watch";
 import type { WorkbookModel } from "./support/fake-excel-workbook";
 import { routeFakeOffice } from "./support/fake-office";
-import { NO_PROBLEMS, startPane, type PaneSession } from "./support/pane-session";
+import { NO_PROBLEMS, startPane, type PaneSession, fillTry } from "./support/pane-session";
 
 jest.setTimeout(120000);
 
@@ -66,16 +66,6 @@ async function waitForContent(loc: Locator, expected: string, timeout = 8000): P
     if (Date.now() > end) throw new Error(`expected ${JSON.stringify(expected)}, found ${JSON.stringify(last)}`);
     await new Promise((r) => setTimeout(r, 50));
   }
-}
-
-async function fillTry(page: Page, rows: [string, string][], temperature = "25"): Promise<void> {
-  await page.getByRole("tab", { name: "Try it" }).click();
-  while ((await page.locator(".try-name").count()) < rows.length) await page.click("#try-add-row");
-  for (let i = 0; i < rows.length; i++) {
-    await page.locator(".try-name").nth(i).fill(rows[i][0]);
-    await page.locator(".try-amount").nth(i).fill(rows[i][1]);
-  }
-  await page.fill("#try-temp", temperature);
 }
 
 describe("Picture view in Chromium at the pane's width", () => {

@@ -11,7 +11,7 @@ import * as path from "path";
 import type { Locator, Page } from "playwright-core";
 import { routeOffice, ROOT } from "./support/browser";
 import { waitForText } from "./support/page-watch";
-import { NO_PROBLEMS, startPane, type PaneSession } from "./support/pane-session";
+import { NO_PROBLEMS, startPane, type PaneSession, fillTry } from "./support/pane-session";
 
 jest.setTimeout(120000);
 
@@ -47,16 +47,6 @@ function expectApartAndInside(label: string, items: Box[], frame: Box): void {
       expect({ label, pair: [a.text, b.text], overlap }).toEqual({ label, pair: [a.text, b.text], overlap: false });
     }
   }
-}
-
-async function fillTry(page: Page, rows: [string, string][]): Promise<void> {
-  await page.getByRole("tab", { name: "Try it" }).click();
-  while ((await page.locator(".try-name").count()) < rows.length) await page.click("#try-add-row");
-  for (let i = 0; i < rows.length; i++) {
-    await page.locator(".try-name").nth(i).fill(rows[i][0]);
-    await page.locator(".try-amount").nth(i).fill(rows[i][1]);
-  }
-  await page.fill("#try-temp", "25");
 }
 
 describe("Picture view: a metal's distribution in Chromium at the pane's width", () => {

@@ -51,3 +51,14 @@ export async function startPane(opts: PaneOptions): Promise<PaneSession> {
     throw e;
   }
 }
+
+/** Fills Try it's rows (adding rows as needed) and its temperature, on the Try it tab. */
+export async function fillTry(page: Page, rows: [string, string][], temperature = "25"): Promise<void> {
+  await page.getByRole("tab", { name: "Try it" }).click();
+  while ((await page.locator(".try-name").count()) < rows.length) await page.click("#try-add-row");
+  for (let i = 0; i < rows.length; i++) {
+    await page.locator(".try-name").nth(i).fill(rows[i][0]);
+    await page.locator(".try-amount").nth(i).fill(rows[i][1]);
+  }
+  await page.fill("#try-temp", temperature);
+}
