@@ -84,6 +84,7 @@ const GROUPS: [string, string][] = [
   ["7. Molar masses", "molar-masses"],
   ["8. Preparation tables (mixtures of stocks)", "sorensen-phosphate"],
   ["8. Preparation tables (mixtures of stocks)", "khp-hcl"],
+  ["8. Preparation tables (mixtures of stocks)", "lange-table-8-16-beta"],
   ["8. Preparation tables (mixtures of stocks)", "acetate"],
 ];
 

@@ -1,7 +1,8 @@
 /**
  * Buffer value β of standards against Lange's Handbook of Chemistry, 15th ed., Table 8.15 (values,
  * tolerance and its reason: test/reference/lange-beta.json; the source: docs/references.md), and the
- * ideal-solution identity. β here is dC(NaOH)/dpH with pH = −log a(H⁺), Davies, 25 °C.
+ * ideal-solution identity, and Bates & Bower's β column for KH phthalate buffers (Lange's Table 8.16,
+ * test/reference/lange-table-8-16-beta.json). β here is dC(NaOH)/dpH with pH = −log a(H⁺), Davies, 25 °C.
  */
 import { solveEquilibrium, kw, type Mixture } from "../../src/chem";
 import { casesOf } from "../reference";
@@ -16,6 +17,13 @@ function betaOf(mix: Mixture, activity: "davies" | "ideal" = "davies") {
 describe("β of standards vs Lange's Table 8.15 (test/reference/lange-beta.json)", () => {
   // The borax row is a known deviation (its reason is in the file): asserted to stay off as documented.
   test.each(casesOf("lange-beta"))("$id: $label, β $printed", (c) => {
+    f.expectReference(betaOf(f.referenceMixture(c.mixture)).beta, c, `β ${c.label}, Davies`);
+  });
+});
+
+describe("β of KH phthalate buffers vs Bates & Bower's β column (test/reference/lange-table-8-16-beta.json)", () => {
+  // The same definition as for the standards, at other compositions (docs/references.md, section 1).
+  test.each(casesOf("lange-table-8-16-beta"))("$id: $label, β $printed", (c) => {
     f.expectReference(betaOf(f.referenceMixture(c.mixture)).beta, c, `β ${c.label}, Davies`);
   });
 });

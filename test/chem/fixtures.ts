@@ -156,6 +156,7 @@ const BY_REFERENCE_NAME: Record<string, Component> = {
   NaHCO3,
   Na2CO3,
   HCl,
+  NaOH,
   "acetic acid": aceticAcid,
   "sodium acetate": sodiumAcetate,
   "citric acid": citricAcid,
