@@ -51,6 +51,31 @@ describe("published values with the library's complexes", () => {
     expect(eq.beta).toBeLessThan(0.0235);
   });
 
+  test("no reading of β = dB/dpH brings borax within 5 % of the printed value (docs/references.md, section 1)", () => {
+    const c = referenceCase("lange-beta", "BETA-BORAX");
+    const [[name, conc]] = c.mixture!;
+    const pH = (names: string[], amounts: number[], activity: string) => Number(AQ.PH([names], [amounts], [[25]], [[activity]])[0][0]);
+    const readings: number[] = [];
+    for (const activity of ["davies", "debye-huckel", "ideal"]) {
+      readings.push(Number(AQ.BETA([[name]], [[conc]], [[25]], [[activity]])[0][0])); // dC(NaOH)/dpH, no volume change
+      const p0 = pH([name], [conc], activity);
+      const d = 1e-5;
+      readings.push(d / (p0 - pH([name, "HCl"], [conc, d], activity))); // against strong acid
+      for (const titrant of [0.1, 0.02]) {
+        // ±0.1 mmol of base and acid from a stock of this concentration into 1 L: everything is diluted
+        const n = 1e-4;
+        const v = 1 + n / titrant;
+        const up = pH([name, "NaOH"], [conc / v, n / v], activity);
+        const down = pH([name, "HCl"], [conc / v, n / v], activity);
+        readings.push((2 * n) / v / (up - down));
+      }
+    }
+    for (const b of readings) {
+      expect(b).toBeGreaterThan(c.expected * 1.05);
+      expect(b).toBeLessThan(c.expected + c.knownDeviation!.bound);
+    }
+  });
+
   test("the primary borax standard (0.01 mol/kg) keeps its pH within the standards' tolerance with polyborates", () => {
     const c = casesOf("ph-standards").find((x) => /borax/i.test(x.label ?? "") && x.temperatureC === 25);
     if (!c) throw new Error("no borax case at 25 °C in ph-standards");
