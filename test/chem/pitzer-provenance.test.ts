@@ -14,7 +14,9 @@ test("phosphate: Pitzer & Mayorga's binary sets for its three anions with Na⁺ 
   expect(naH2.values).toBe(`β0 = ${String(record.beta0).replace("-", "−")}, β1 = ${record.beta1}, Cφ = ${record.cphi}`);
   expect(naH2.source).toBe(record.source);
   expect(naH2.source).toMatch(/Pitzer & Mayorga, J\. Phys\. Chem\. 77, 2300 \(1973\)/);
-  expect(naH2).toMatchObject({ status: "tabulated", flagged: false });
+  // Pitzer & Mayorga's table was not seen here: from memory, unverified, and flagged
+  expect(naH2).toMatchObject({ status: "memory", flagged: true, statusText: "from memory, unverified (the primary table was not seen here)" });
+  expect(naH2.source).not.toMatch(/pytzer|compilation/);
   const theta = c.lines.find((l) => l.kind === "theta" && l.ions.includes("HPO4^2-"))!;
   expect(theta.source).toMatch(/Hershey, Fernandez & Millero/);
   expect(theta.status).toBe("published");
@@ -28,9 +30,10 @@ test("phosphate: Pitzer & Mayorga's binary sets for its three anions with Na⁺ 
 test("a value from memory is flagged and says so once (sodium with acetate; θ of H⁺ and K⁺); a seen one is not (θ of K⁺ and Na⁺)", () => {
   const acetate = pitzerCoverage("system", "acetate").lines.find((l) => l.ions.join() === "Na+,CH3COO-")!;
   expect(acetate.flagged).toBe(true);
-  expect(acetate.statusText).toMatch(/^from memory, unverified \(the pytzer copy/);
+  expect(acetate.statusText).toBe("from memory, unverified (the primary table was not seen here)");
   const hk = pitzerCoverage("ion", "k").lines.find((l) => l.kind === "theta" && l.ions.includes("H+"))!;
-  expect(hk).toMatchObject({ flagged: true, statusText: "from memory, unverified" });
+  expect(hk).toMatchObject({ flagged: true, statusText: "from memory, unverified (the primary table was not seen here)" });
+  expect(hk.source).toMatch(/^Harvie, Møller & Weare, Geochim\. Cosmochim\. Acta 48, 723 \(1984\)/);
   const kna = pitzerCoverage("ion", "k").lines.find((l) => l.kind === "theta" && l.ions.includes("Na+"))!;
   expect(kna).toMatchObject({ flagged: false, values: "θ = −0.0032" });
   expect(kna.source).toMatch(/^Geochem\. Trans\. 6, 19 \(2005\)/);
@@ -48,4 +51,14 @@ test("citrate borrows the phosphate analogue, Tris and histidine take Davies, a 
   expect(hepes.lines).toEqual([]);
   expect(pitzerRuleText(hepes.rules[0])).toMatch(/Davies γ is used for them \(the fallback rule\)/);
   expect(pitzerCoverage("ion", "na").lines.length).toBeGreaterThan(10);
+});
+
+test("every parameter names its published source and no program: 'published' (seen) or 'from memory, unverified' with the primary named", () => {
+  for (const p of [...BINARY, ...THETA, ...PSI]) {
+    const where = `${"cation" in p ? `${p.cation}–${p.anion}` : p.ions.join(", ")}`;
+    expect({ where, source: p.source }).not.toEqual({ where, source: expect.stringMatching(/pytzer|compilation|\.py\b/i) });
+    expect({ where, note: p.note ?? "" }).not.toEqual({ where, note: expect.stringMatching(/pytzer|compilation|\.py\b/i) });
+    expect({ where, cited: /\(\d{4}\)/.test(p.source) }).toEqual({ where, cited: true });
+    if (p.status === "memory") expect({ where, note: p.note }).toEqual({ where, note: expect.stringMatching(/^from memory, unverified/) });
+  }
 });

@@ -51,7 +51,6 @@ export function pitzerRuleText(rule: PitzerRule, name: (formula: string) => stri
 
 export const PITZER_STATUS_TEXT: Readonly<Record<ParameterStatus, string>> = {
   published: "seen in the publication",
-  tabulated: "as tabulated in an open-source compilation that cites the publication",
   memory: "from memory, unverified",
 };
 

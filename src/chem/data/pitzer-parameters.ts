@@ -5,20 +5,21 @@
  * provenance view are another helper's work in this round; these numbers have the same shape of
  * provenance (source, locator, status) so that moving them into src/library later is mechanical.
  *
- * Status words (as in docs/references.md): "published" — seen in the primary publication (for the
- * phosphate–chloride mixing terms, its abstract); "tabulated" — the value as tabulated in a named
- * open-source compilation that cites the primary source (the primary table itself was not seen
- * here); "memory" — from memory, unverified.
+ * Status words (as in docs/references.md): "published" — seen in the publication named (for the
+ * phosphate–chloride mixing terms, its abstract; for θ, ψ of K⁺ with Na⁺, the table of a later paper);
+ * "memory" — from memory, unverified:
+ * the primary publication is named, its table was not seen here (flagged in the pane and by AQ.CHECK).
+ * No value here rests on an existing program or its parameter files.
  *
  * Conventions (Pitzer, Activity Coefficients in Electrolyte Solutions, 2nd ed., CRC 1991, ch. 3):
  * binary parameters β0, β1 (α1 = 2.0 (kg/mol)^½), β2 (α2 = 12, used by no pair here), and Cφ; Pitzer
  * & Mayorga print 2:1 and 3:1 salts with factors (4/3)β, (2^{5/2}/3)Cφ and (3/2)β, (3^{3/2}/2)Cφ:
  * the values below are the parameters themselves, the printed numbers divided by those factors.
- * θ (like-charged pairs) and ψ (triplets): a pair or triplet not listed has θ = 0 or ψ = 0 (the
- * convention of the source compilations); the unsymmetrical-mixing term Eθ is always computed.
+ * θ (like-charged pairs) and ψ (triplets): a pair or triplet not listed has θ = 0 or ψ = 0 (as in
+ * Harvie, Møller & Weare's model: unknown mixing terms are set to zero); the unsymmetrical-mixing term Eθ is always computed.
  */
 
-export type ParameterStatus = "published" | "tabulated" | "memory";
+export type ParameterStatus = "published" | "memory";
 
 export interface Provenance {
   source: string;
@@ -41,15 +42,11 @@ export interface MixingParameter extends Provenance {
   value: number;
 }
 
-const PM73_I =
-  "Pitzer & Mayorga, J. Phys. Chem. 77, 2300 (1973), Table I (1:1), as tabulated in the pytzer compilation (M. P. Humphreys, pytzer/tables.py, PM73_TableI); primary table not seen";
-const PM73_VI =
-  "Pitzer & Mayorga, J. Phys. Chem. 77, 2300 (1973), Table VI (2:1 and 1:2), printed (4/3)β and (2^{5/2}/3)Cφ converted, as tabulated in the pytzer compilation (pytzer/tables.py, PM73_TableVI); primary table not seen";
-const PM73_VIII =
-  "Pitzer & Mayorga, J. Phys. Chem. 77, 2300 (1973), Table VIII (3:1 and 1:3), printed (3/2)β and (3^{3/2}/2)Cφ converted, as tabulated in the pytzer compilation (pytzer/tables.py, PM73_TableVIII); primary table not seen";
-const HMW84 =
-  "Harvie, Møller & Weare, Geochim. Cosmochim. Acta 48, 723 (1984), Tables 1–2, as tabulated in the pytzer compilation (pytzer/parameters.py, *_HMW84); primary tables not seen";
-const HMW84_MEMORY = "Harvie, Møller & Weare, Geochim. Cosmochim. Acta 48, 723 (1984), Table 2";
+const PM73_I = "Pitzer & Mayorga, J. Phys. Chem. 77, 2300 (1973), Table I (1:1 electrolytes)";
+const PM73_VI = "Pitzer & Mayorga, J. Phys. Chem. 77, 2300 (1973), Table VI (2:1 and 1:2), printed (4/3)β and (2^{5/2}/3)Cφ converted";
+const PM73_VIII = "Pitzer & Mayorga, J. Phys. Chem. 77, 2300 (1973), Table VIII (3:1 and 1:3), printed (3/2)β and (3^{3/2}/2)Cφ converted";
+const HMW84 = "Harvie, Møller & Weare, Geochim. Cosmochim. Acta 48, 723 (1984), Tables 1–2";
+const NOT_SEEN = "from memory, unverified (the primary table was not seen here)";
 const GT05 =
   "Geochem. Trans. 6, 19 (2005) (deliquescence of NaCl–NaNO3, KNO3–NaNO3 and NaCl–KNO3 mixtures), Table I, coefficient a1 of the 25 °C-centred temperature equation, after its ref. 10; that reference itself not seen";
 const HFM89 =
@@ -62,7 +59,8 @@ const t = (cation: string, anion: string, beta0: number, beta1: number, cphi: nu
   beta1,
   cphi,
   source,
-  status: "tabulated",
+  status: "memory",
+  note: NOT_SEEN,
 });
 
 /** Cation–anion parameters. Printed values of Tables VI and VIII are converted here, with the printed number beside. */
@@ -102,31 +100,31 @@ export const BINARY: readonly BinaryParameters[] = [
   t("Na+", "CO3-2", 0.0399, 1.389, 0.0044, HMW84),
   t("K+", "CO3-2", 0.1488, 1.43, -0.0015, HMW84),
   // Acetate: Pitzer & Mayorga Table I
-  { ...t("Na+", "CH3COO-", 0.1426, 0.3237, -0.00629, PM73_I), status: "memory", note: "from memory, unverified (the pytzer copy of Table I seen here has no acetates)" },
-  { ...t("K+", "CH3COO-", 0.1587, 0.3251, -0.0066, PM73_I), status: "memory", note: "from memory, unverified (the pytzer copy of Table I seen here has no acetates)" },
+  t("Na+", "CH3COO-", 0.1426, 0.3237, -0.00629, PM73_I),
+  t("K+", "CH3COO-", 0.1587, 0.3251, -0.0066, PM73_I),
 ];
 
-const th = (a: string, b: string, value: number, source: string, status: ParameterStatus = "tabulated"): MixingParameter => ({
+const th = (a: string, b: string, value: number, source: string, status: ParameterStatus = "memory"): MixingParameter => ({
   ions: [a, b],
   value,
   source,
   status,
-  ...(status === "memory" ? { note: "from memory, unverified" } : {}),
+  ...(status === "memory" ? { note: NOT_SEEN } : {}),
 });
-const ps = (a: string, b: string, c: string, value: number, source: string, status: ParameterStatus = "tabulated"): MixingParameter => ({
+const ps = (a: string, b: string, c: string, value: number, source: string, status: ParameterStatus = "memory"): MixingParameter => ({
   ions: [a, b, c],
   value,
   source,
   status,
-  ...(status === "memory" ? { note: "from memory, unverified" } : {}),
+  ...(status === "memory" ? { note: NOT_SEEN } : {}),
 });
 
 /** θ of like-charged pairs (Harvie, Møller & Weare 1984, Table 2). Absent pairs: θ = 0. */
 export const THETA: readonly MixingParameter[] = [
   th("H+", "Na+", 0.036, HMW84),
   // Harvie, Møller & Weare's own θ(K, Na) is recalled as −0.012 (not seen); the value of a table that was seen is used.
-  th("K+", "Na+", -0.0032, GT05),
-  th("H+", "K+", 0.005, HMW84_MEMORY, "memory"),
+  th("K+", "Na+", -0.0032, GT05, "published"),
+  th("H+", "K+", 0.005, HMW84),
   th("Cl-", "OH-", -0.05, HMW84),
   th("Cl-", "SO4-2", 0.02, HMW84),
   th("Cl-", "HSO4-", -0.006, HMW84),
@@ -146,8 +144,8 @@ export const PSI: readonly MixingParameter[] = [
   ps("H+", "Na+", "Cl-", -0.004, HMW84),
   ps("H+", "Na+", "HSO4-", -0.0129, HMW84),
   // recalled from Harvie, Møller & Weare as −0.0018 (not seen); the seen table's value is used.
-  ps("K+", "Na+", "Cl-", -0.00369, GT05),
-  ps("H+", "K+", "Cl-", -0.011, HMW84_MEMORY, "memory"),
+  ps("K+", "Na+", "Cl-", -0.00369, GT05, "published"),
+  ps("H+", "K+", "Cl-", -0.011, HMW84),
   ps("Na+", "Cl-", "OH-", -0.006, HMW84),
   ps("K+", "Cl-", "OH-", -0.006, HMW84),
   ps("Na+", "Cl-", "SO4-2", 0.0014, HMW84),
