@@ -2,7 +2,7 @@
  * The built-in library, assembled from the data files in data/. Each data file is itself a valid
  * library file holding one section; together they form the read-only bottom layer.
  *
- * BUILTIN_VERSION goes into the fingerprint ("PL-1.3.3-…"). Any change to the built-in constants
+ * BUILTIN_VERSION goes into the fingerprint ("PL-1.3.4-…"). Any change to the built-in constants
  * must bump it; a test pins the built-in fingerprint so that a change cannot slip through unnoticed.
  */
 import atomicWeights from "./data/atomic-weights.json";
@@ -13,7 +13,7 @@ import systems from "./data/systems.json";
 import type { LibraryDoc } from "./types";
 import { LIBRARY_FORMAT, SCHEMA_VERSION } from "./types";
 
-export const BUILTIN_VERSION = "1.3.3";
+export const BUILTIN_VERSION = "1.3.4";
 
 /** The data files as loaded, for tests that validate each one. */
 export const BUILTIN_FILES: Readonly<Record<string, unknown>> = {

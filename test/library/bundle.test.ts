@@ -19,7 +19,9 @@ import path from "node:path";
 // Malate's pK, ΔrH° and ΔrCp° from Eden & Bates and maleate pK1, with their sources, about 1.6 KB.
 // The reasons measured conditions are refused on values that are not converted, about 0.8 KB
 // (166.7 KB measured with them).
-const LIBRARY_BUDGET_BYTES = 167 * 1024;
+// Round 4 of issue 16: the calorimetric ΔrH° of TES, glycine and tricine and a textbook table for
+// lysine, glutamate and histidine pK1, with their three sources, about 0.5 KB (167.2 KB measured).
+const LIBRARY_BUDGET_BYTES = 168 * 1024;
 
 const bundle = (entry: string) =>
   buildSync({

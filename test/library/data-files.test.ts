@@ -154,12 +154,13 @@ describe("values as read in their published sources (the source and place are in
     ["methionine", 0, 2.13, "voet-table-4-1"],
     ["methionine", 1, 9.280, "voet-table-4-1"], // printed with two decimals; written with three so that the one-home check of test/docs does not take it for the Ph. Eur. borax pH at 15 °C
     ["phosphate", 2, 12.325, "ion-pairs-pmc2630969"], // the table the phosphate ion pairs come from
-    ["lysine", 0, 2.18, "carey-table-27-3"],
-    ["lysine", 1, 8.95, "carey-table-27-3"],
-    ["lysine", 2, 10.53, "carey-table-27-3"],
-    ["glutamate", 0, 2.19, "glutamic-acid-dissociation-web"],
-    ["glutamate", 1, 4.25, "glutamic-acid-dissociation-web"],
-    ["glutamate", 2, 9.67, "glutamic-acid-dissociation-web"],
+    ["lysine", 0, 2.18, "lehninger-table-3-1"],
+    ["lysine", 1, 8.95, "lehninger-table-3-1"],
+    ["lysine", 2, 10.53, "lehninger-table-3-1"],
+    ["glutamate", 0, 2.19, "lehninger-table-3-1"],
+    ["glutamate", 1, 4.25, "lehninger-table-3-1"], // the side chain (pKR)
+    ["glutamate", 2, 9.67, "lehninger-table-3-1"],
+    ["histidine", 0, 1.82, "lehninger-table-3-1"],
     ["phthalate", 0, 2.946, "fromm-polyprotic"], // K1 = 1.13·10⁻³
     ["phthalate", 1, 5.409, "fromm-polyprotic"], // K2 = 3.90·10⁻⁶
     ["malate", 0, 3.458, "eden-bates-1959-malic"], // K1 = 3.48·10⁻⁴
@@ -173,6 +174,20 @@ describe("values as read in their published sources (the source and place are in
   test("calorimetric ΔrH° of HEPES (20.8 kJ/mol) and MOPS (20.7 kJ/mol) in water", () => {
     expect([sys("hepes").steps[0].dH?.value, sys("hepes").steps[0].dH?.source]).toEqual([20.8, "thermochim-2006-hepes"]);
     expect([sys("mops").steps[0].dH?.value, sys("mops").steps[0].dH?.source]).toEqual([20.7, "thermochim-2011-mops"]);
+  });
+
+  test("calorimetric ΔrH° in water of TES (30.0), glycine (4.4 and 46.3) and tricine (30.8 kJ/mol), published", () => {
+    const dH = (id: string, i: number) => { const r = sys(id).steps[i].dH!; return [r.value, r.source, r.status]; };
+    expect(dH("tes", 0)).toEqual([30.0, "thermochim-2004-bes-tes", "published"]);
+    expect(dH("glycine", 0)).toEqual([4.4, "thermochim-2006-glycines", "published"]);
+    expect(dH("glycine", 1)).toEqual([46.3, "thermochim-2006-glycines", "published"]);
+    expect(dH("tricine", 0)).toEqual([30.8, "thermochim-2006-glycines", "published"]);
+  });
+
+  test("Bicine keeps the recalled ΔrH° (26.34 kJ/mol): the e.m.f. pK at 37 °C speaks against the calorimetric 24.9", () => {
+    const r = sys("bicine").steps[0].dH!;
+    expect([r.value, r.status]).toEqual([26.34, "unverified"]);
+    expect(r.note).toMatch(/24\.9/);
   });
 
   test("a value recalled from a source that could not be read names it but stays unverified", () => {
