@@ -7,12 +7,13 @@
  *
  *   f1  a 10 000-row table as ONE formula =AQ.PH(names, A1:B10000) against the 10 000-row sheet of
  *       built-in Henderson–Hasselbalch formulas (the sheets take turns; best CPU time of each);
- *       target: ≤ 0.5× the Henderson–Hasselbalch sheet. Printed beside it, the engine's floor: the
+ *       target: ≤ 0.5× the Henderson–Hasselbalch sheet, judged on the best times, with the ratio of
+ *       every round (the two sheets run back to back) printed as its median and range. Printed beside it, the engine's floor: the
  *       same sheet of values with no formula, and the Henderson–Hasselbalch table as one built-in
  *       array formula (what any one-formula table costs in HyperFormula before its own work);
- *   f2  the one-formula table from 1 000 to 200 000 rows: CPU time per row, raw and beyond the
- *       engine's fixed cost (a one-row sheet), beside the same sheet of values alone; target: flat
- *       (the largest per-row cost within 1.3× the smallest);
+ *   f2  the one-formula table from 1 000 to 200 000 rows: CPU time per row, first call and steady
+ *       state, beside HyperFormula's own sheets at the same sizes (scripts/bench-per-row.ts); target:
+ *       flat (the largest steady per-row cost within 1.3× the smallest);
  *   f3  `protolyte table` (the compiled command line, a child process) from 1 000 to 1 000 000 rows:
  *       CPU time per row beyond the cost of starting (a file of one row), and peak memory (the
  *       child's maximum resident set, from /usr/bin/time); targets: flat, and 1 000 000 rows within 300 MB;
@@ -28,63 +29,9 @@ import { cpus, loadavg, tmpdir } from "node:os";
 import { join } from "node:path";
 import { PH } from "../src/functions/functions";
 import { clearMixtureCache } from "../src/functions/mixture";
-import { shippedCode, type ShippedCode } from "./bench-shipped";
+import { f2 } from "./bench-per-row";
+import { amountsOf, code, cpuNow, hhSheet, median, print, sheetCpu, sheetOf, us, valuesSheet, verdict, type Raw } from "./bench-sheets";
 import { f5 } from "./bench-warm-start";
-
-/** f1 and f2 evaluate sheets with the code as it ships, bundled into one scope (bench-shipped.ts). */
-let shipped: ShippedCode | null = null;
-function code(): ShippedCode {
-  shipped ??= shippedCode(join(__dirname, ".."));
-  return shipped;
-}
-
-type Raw = (string | number | null)[][];
-
-function cpuNow(): number {
-  const u = process.cpuUsage();
-  return (u.user + u.system) / 1e6;
-}
-
-function print(header: string[], rows: string[][]): void {
-  const widths = header.map((h, c) => Math.max(h.length, ...rows.map((r) => (r[c] ?? "").length)));
-  const line = (cells: string[]) => cells.map((x, c) => (c === 0 ? x.padEnd(widths[c]!) : x.padStart(widths[c]!))).join("  ");
-  console.log(line(header));
-  console.log(widths.map((w) => "-".repeat(w)).join("  "));
-  for (const r of rows) console.log(line(r));
-}
-
-const us = (seconds: number, rows: number): string => `${((seconds / rows) * 1e6).toFixed(2)} µs`;
-const verdict = (ok: boolean): string => (ok ? "met" : "NOT met");
-
-/** Row i: acetic acid and sodium acetate, mol/L (the grid of part b). */
-function amountsOf(i: number): [number, number] {
-  return [0.01 + (i % 100) * 0.001, 0.01 + (Math.floor(i / 100) % 100) * 0.001];
-}
-
-/** Data in A1:B<rows>, names in E1:F1, and either one table formula in C1 or a formula per row. */
-function sheetOf(rows: number, perRow: ((r: number) => string) | null): Raw {
-  const sheet: Raw = [];
-  for (let i = 0; i < rows; i++) {
-    const [a, b] = amountsOf(i);
-    const r = i + 1;
-    const c = perRow !== null ? perRow(r) : i === 0 ? `=AQ.PH(E1:F1,A1:B${rows})` : null;
-    sheet.push(i === 0 ? [a, b, c, null, "acetic acid", "sodium acetate"] : [a, b, c]);
-  }
-  return sheet;
-}
-
-function sheetCpu(sheet: Raw): { cpu: number; errors: number } {
-  const { clearMixtureCache, evaluateSheets } = code();
-  clearMixtureCache();
-  const t0 = cpuNow();
-  const [result] = evaluateSheets({ Sheet1: sheet as never });
-  return { cpu: cpuNow() - t0, errors: result!.errors.length };
-}
-
-/** The 10 000-row sheet of values alone (names in E1:F1), with `formula` in C1 if given. */
-function valuesSheet(rows: number, formula: string | null): Raw {
-  return sheetOf(rows, (r) => (r === 1 && formula !== null ? formula : (null as never)));
-}
 
 /** The one-formula table's CPU per row in f1, for f5. */
 let tablePerRow = NaN;
@@ -93,7 +40,7 @@ function f1(quick: boolean): void {
   const N = 10_000;
   console.log(`\n(f1) ${N.toLocaleString("en-US")}-row what-if table as one formula vs the Henderson–Hasselbalch sheet (HyperFormula, evaluateSheets; sheets take turns)`);
   const sheets: [string, Raw][] = [
-    ["=4.756+LOG10(B1/A1) per row  (built-ins: baseline)", sheetOf(N, (r) => `=4.756+LOG10(B${r}/A${r})`)],
+    ["=4.756+LOG10(B1/A1) per row  (built-ins: baseline)", hhSheet(N)],
     [`=AQ.PH(E1:F1,A1:B${N})  one formula, spilled`, sheetOf(N, null)],
     ["=AQ.PH($E$1:$F$1,A1:B1) per row  (for comparison)", sheetOf(N, (r) => `=AQ.PH($E$1:$F$1,A${r}:B${r})`)],
     ["the same values, no formula  (engine's floor)", valuesSheet(N, null)],
@@ -101,12 +48,15 @@ function f1(quick: boolean): void {
   ];
   for (const [, s] of sheets) sheetCpu(s.slice(0, 2000)); // warm-up
   const best = sheets.map(() => Infinity);
+  const rounds: number[] = []; // table / baseline within each round
   for (let round = 0; round < (quick ? 3 : 7); round++) {
-    sheets.forEach(([label, s], k) => {
+    const times = sheets.map(([label, s]) => {
       const t = sheetCpu(s);
       if (t.errors > 0) throw new Error(`bench: ${label}: ${t.errors} error cells`);
-      best[k] = Math.min(best[k]!, t.cpu);
+      return t.cpu;
     });
+    times.forEach((t, k) => (best[k] = Math.min(best[k]!, t)));
+    rounds.push(times[1]! / times[0]!);
   }
   print(
     ["sheet", "CPU time", "per row", "× baseline"],
@@ -139,47 +89,14 @@ function f1(quick: boolean): void {
   const [hh, table, , floor, builtin] = best as [number, number, number, number, number];
   tablePerRow = table / N;
   const ratio = table / hh;
-  console.log(`    target: one-formula table ≤ 0.5× the Henderson–Hasselbalch sheet: ${verdict(ratio <= 0.5)} (${ratio.toFixed(2)}×)`);
+  console.log(
+    `    target: one-formula table ≤ 0.5× the Henderson–Hasselbalch sheet: ${verdict(ratio <= 0.5)} (${ratio.toFixed(2)}× of the best times;` +
+      ` round by round: median ${median(rounds).toFixed(2)}×, ${Math.min(...rounds).toFixed(2)}–${Math.max(...rounds).toFixed(2)}×, ≤ 0.5× in ${rounds.filter((r) => r <= 0.5).length} of ${rounds.length})`,
+  );
   console.log(
     `    the engine's floor: the values alone ${(floor / hh).toFixed(2)}×, the same table as one built-in formula ${(builtin / hh).toFixed(2)}×;` +
       ` AQ.PH's table above the built-in one: ${us(Math.max(0, table - builtin), N)} a row`,
   );
-}
-
-function f2(quick: boolean): void {
-  const sizes = quick ? [1_000, 10_000, 50_000] : [1_000, 10_000, 50_000, 200_000];
-  console.log(`\n(f2) One-formula table in the sheet: CPU time per row against the number of rows (best of ${quick ? 5 : 11} up to 10 000 rows, of 3 at 50 000, 1 run at 200 000)`);
-  const bestOf = (s: Raw, runs: number): number => {
-    let best = Infinity;
-    for (let r = 0; r < runs; r++) best = Math.min(best, sheetCpu(s).cpu);
-    return best;
-  };
-  // The engine's fixed cost: a one-row table (parser, function registry, sheet set-up).
-  const fixed = bestOf(sheetOf(1, (r) => `=AQ.PH(E1:F1,A${r}:B${r})`), 5);
-  const rows = sizes.map((n) => {
-    // Small sheets take a few ms: more runs, so that the best is not a run the machine's load slowed.
-    const runs = n >= 200_000 ? 1 : n >= 50_000 ? 3 : quick ? 5 : 11;
-    const table = bestOf(sheetOf(n, null), runs);
-    const values = bestOf(valuesSheet(n, null), runs);
-    return { n, table, values };
-  });
-  print(
-    ["rows", ...sizes.map((n) => n.toLocaleString("en-US"))],
-    [
-      ["one-formula table, CPU per row", ...rows.map((r) => us(r.table, r.n))],
-      ["  beyond the fixed cost", ...rows.map((r) => us(Math.max(0, r.table - fixed), r.n))],
-      ["the same values alone, per row", ...rows.map((r) => us(r.values, r.n))],
-      ["  table above the values alone", ...rows.map((r) => us(Math.max(0, r.table - r.values), r.n))],
-    ],
-  );
-  console.log(`    fixed cost of an engine (a one-row table): ${(fixed * 1000).toFixed(0)} ms`);
-  const spread = (xs: number[]): number => Math.max(...xs) / Math.min(...xs);
-  const raw = spread(rows.map((r) => r.table / r.n));
-  const beyond = spread(rows.map((r) => Math.max(1e-12, r.table - fixed) / r.n));
-  const last = sizes[sizes.length - 1]!.toLocaleString("en-US");
-  console.log(`    target: flat from 1 000 to ${last} rows (largest per-row cost within 1.3× the smallest): ${verdict(raw <= 1.3)} (${raw.toFixed(2)}×)`);
-  const above = spread(rows.map((r) => Math.max(1e-12, r.table - r.values) / r.n));
-  console.log(`    the same, beyond the engine's fixed cost: ${verdict(beyond <= 1.3)} (${beyond.toFixed(2)}×); the table above the values alone: ${above.toFixed(2)}×; the values alone (HyperFormula's own): ${spread(rows.map((r) => r.values / r.n)).toFixed(2)}×`);
 }
 
 /** Writes a CSV of n rows (temperature varies too). */

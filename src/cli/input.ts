@@ -91,12 +91,28 @@ function readCsv(buffer: Buffer, file: string, separator: string | undefined, no
   return new Map([["Sheet1", parsed.rows.map((row) => row.map((f) => toCellContent(f, decimalComma)))]]);
 }
 
+/** "1 row without its row number", "3 rows without their row number". */
+const without = (n: number, thing: string, what: string): string => (n === 1 ? `1 ${thing} without its ${what}` : `${n} ${thing}s without their ${what}`);
+
+/** The message for a sheet whose rows or cells lack their `r` attribute (xlsx-text-limit.ts). */
+function unnumbered(file: string, part: string, scan: XmlPartScanner): string {
+  const missing = [
+    scan.rowsWithoutNumber > 0 ? without(scan.rowsWithoutNumber, "row", "row number") : null,
+    scan.cellsWithoutAddress > 0 ? without(scan.cellsWithoutAddress, "cell", "address") : null,
+  ].filter((x) => x !== null);
+  return (
+    `'${file}' is not read: its sheet ${part} has ${missing.join(" and ")} (the r attribute, which Excel always writes and the` +
+    ` workbook reader used here needs); open the file in Excel or LibreOffice and save it again`
+  );
+}
+
 /**
  * The package before exceljs loads it, at low memory: its declared sizes against the limit, then
  * every part inflated as a stream and held to its declared size (a package that lies about its sizes
  * is refused), the XML of the worksheets and shared strings scanned as it passes (xlsx-text-limit.ts):
  * a text longer than a cell holds, more rows than a sheet may have, or more cells than the sheets may
- * span, and the inflation stops there with one line.
+ * span, and the inflation stops there with one line. A sheet whose rows or cells lack their number
+ * (the `r` attribute) is refused with one line too: exceljs cannot load it.
  */
 async function checkPackage(buffer: Buffer, file: string): Promise<ZipEntry[]> {
   let entries;
@@ -130,6 +146,7 @@ async function checkPackage(buffer: Buffer, file: string): Promise<ZipEntry[]> {
       throw new InputError(`'${file}' is not a readable XLSX workbook: part ${entry.name}: ${(e as Error).message}`);
     }
     cellsBefore += scan?.cells ?? 0;
+    if (scan !== null && (scan.rowsWithoutNumber > 0 || scan.cellsWithoutAddress > 0)) throw new InputError(unnumbered(file, entry.name, scan));
   }
   return entries;
 }

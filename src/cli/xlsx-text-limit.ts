@@ -12,6 +12,12 @@
  * workbook gives (a character outside the Basic Multilingual Plane counts one here, two in a cell;
  * every <c> is a distinct cell inside the rectangle the limits count), so a package refused here is
  * over the limit for certain; the exact checks run again on the loaded cells.
+ *
+ * It also counts the <row> and <c> elements that lack their `r` attribute (the row number, the cell
+ * address). The format allows leaving them out (rows and cells then follow in order), and some
+ * programs that write XLSX do; Excel always writes them, and exceljs cannot load a sheet without
+ * them (it stops with "Invalid row number in model"), so the command line refuses such a sheet with
+ * a message that says what is missing (input.ts).
  */
 
 const LT = 0x3c; // <
@@ -27,7 +33,12 @@ const C = 0x63;
 const ROW = (0x72 << 16) | (0x6f << 8) | 0x77;
 
 /** The byte ends a tag's name: blank, '>' or '/'. */
-const endsName = (b: number): boolean => b === GT || b === SLASH || b === 0x20 || b === 0x09 || b === 0x0a || b === 0x0d;
+const endsName = (b: number): boolean => b === GT || b === SLASH || isBlank(b);
+const isBlank = (b: number): boolean => b === 0x20 || b === 0x09 || b === 0x0a || b === 0x0d;
+const R = 0x72; // r
+const EQUALS = 0x3d;
+const QUOT = 0x22;
+const APOS = 0x27;
 
 /** Scans one XML part given in chunks (any split, even inside a tag or a character). */
 export class XmlPartScanner {
@@ -37,6 +48,18 @@ export class XmlPartScanner {
   cells = 0;
   /** <row> elements so far (worksheets only). */
   rows = 0;
+  /** <row> elements without an `r` attribute (worksheets only). */
+  rowsWithoutNumber = 0;
+  /** <c> elements without an `r` attribute (worksheets only). */
+  cellsWithoutAddress = 0;
+  /** Reading the attributes of a <row> (2) or <c> (1) start tag, 0 otherwise; whether `r=` was seen. */
+  private attrsOf = 0;
+  private hasR = false;
+  /** Inside an attribute's quoted value: its quote byte, else 0. */
+  private quote = 0;
+  /** The attribute name read so far is a lone "r" (1), or "r" and blanks (2); 0 otherwise. */
+  private rName = 0;
+  private afterBlank = false;
   private current = 0;
   private inTag = false;
   private inEntity = false;
@@ -55,6 +78,9 @@ export class XmlPartScanner {
     for (let i = 0; i < xml.length; i++) {
       const b = xml[i]!;
       if (inTag) {
+        if (this.attrsOf !== 0 && !naming) {
+          if (this.attribute(b)) continue; // inside a quoted value: not the tag's end
+        }
         if (naming) {
           if (nameLength === 0 && b === SLASH && !closing) closing = true;
           else if (b === COLON) {
@@ -70,10 +96,14 @@ export class XmlPartScanner {
             } else if (!closing) {
               if (nameLength === 1 && name === C) this.cells++;
               else if (nameLength === 3 && name === ROW) this.rows++;
+              this.startAttributes(nameLength === 1 && name === C ? 1 : nameLength === 3 && name === ROW ? 2 : 0, b);
             }
           }
         }
-        if (b === GT) inTag = false;
+        if (b === GT) {
+          inTag = false;
+          this.endAttributes();
+        }
         continue;
       }
       if (b === LT) {
@@ -107,7 +137,45 @@ export class XmlPartScanner {
     this.nameLength = nameLength;
     this.closing = closing;
   }
+
+  /** Starts reading the attributes of a start tag (kind 1: <c>, 2: <row>, 0: another); `b` ended its name. */
+  private startAttributes(kind: number, b: number): void {
+    this.attrsOf = kind;
+    this.hasR = false;
+    this.quote = 0;
+    this.rName = 0;
+    this.afterBlank = isBlank(b);
+  }
+
+  /** One byte of a <row> or <c> start tag's attributes; true inside a quoted value (a '>' there does not end the tag). */
+  private attribute(b: number): boolean {
+    if (this.quote !== 0) {
+      if (b === this.quote) this.quote = 0;
+      return true;
+    }
+    if (b === QUOT || b === APOS) {
+      this.quote = b;
+      this.rName = 0;
+      return true;
+    }
+    if (b === EQUALS) {
+      if (this.rName !== 0) this.hasR = true;
+      this.rName = 0;
+    } else if (isBlank(b)) {
+      if (this.rName === 1) this.rName = 2;
+    } else this.rName = b === R && this.afterBlank ? 1 : 0;
+    this.afterBlank = isBlank(b);
+    return false;
+  }
+
+  /** A start tag ended: counts a <row> or <c> without its `r`. */
+  private endAttributes(): void {
+    if (this.attrsOf === 1 && !this.hasR) this.cellsWithoutAddress++;
+    else if (this.attrsOf === 2 && !this.hasR) this.rowsWithoutNumber++;
+    this.attrsOf = 0;
+  }
 }
+
 
 /** The largest text length found in one whole XML part (see XmlPartScanner). */
 export function longestText(xml: Buffer, sharedStrings: boolean): number {

@@ -85,6 +85,16 @@ test("a sheet written with a namespace prefix (<x:row>, <x:c>) is counted as wel
   expectRefused(packageWith(sheet, "prefixed.xlsx"), /has a sheet of more than 200000 rows/);
 });
 
+test("a sheet whose rows or cells lack their number (no r attribute, which exceljs needs): refused in one line that says so", async () => {
+  // The format allows it; Excel always writes r. exceljs stopped with "internal error: Invalid row number in model".
+  const rows = await deflatedRepeat(HEAD, '<row><c r="A1"><v>1</v></c></row>', 3, TAIL);
+  expectRefused(packageWith(rows, "rows-without-r.xlsx"), /sheet xl\/worksheets\/sheet1\.xml has 3 rows without their row number \(the r attribute, .*save it again\n?$/);
+  const cells = await deflatedRepeat(HEAD, '<row r="1"><c><v>1</v></c></row>', 1, TAIL);
+  expectRefused(packageWith(cells, "cells-without-r.xlsx"), /has 1 cell without its address \(the r attribute/);
+  const both = await deflatedRepeat(HEAD, "<row><c><v>1</v></c><c><v>2</v></c></row>", 2, TAIL);
+  expectRefused(packageWith(both, "neither-r.xlsx"), /has 2 rows without their row number and 4 cells without their address/);
+});
+
 test("a workbook within the limits still loads under the same heap cap", async () => {
   const sheet = await deflatedRepeat(HEAD, '<row r="1"><c r="A1"><v>2</v></c></row>', 1, TAIL);
   const r = run(["sheet", packageWith(sheet, "small.xlsx"), "--json"], { node: LOW_MEMORY });
