@@ -9,7 +9,7 @@ import { extname } from "node:path";
 import type { RawCellContent } from "hyperformula";
 import { parseCsvText, toCellContent } from "./csv";
 import type { Workbook } from "./evaluate";
-import { checkCellCount, checkSheetSize, LimitError, LIMITS } from "./limits";
+import { checkCellCount, checkSheetSize, LimitError, LIMITS, XLSX_CELLS_REASON } from "./limits";
 import { readAddinSettings, workbookLibraryText } from "./workbook-library";
 import { textPartKind, XmlPartScanner } from "./xlsx-text-limit";
 import { listZip, streamZipEntry, type ZipEntry } from "./zip";
@@ -59,7 +59,7 @@ function decodeText(buffer: Buffer, notes: string[], file: string): string {
 }
 
 /** Rows × columns of each sheet and in total, against the limits; and every cell's length. */
-function checkSheets(sheets: Workbook): void {
+function checkSheets(sheets: Workbook, kind: "csv" | "xlsx"): void {
   let total = 0;
   for (const [name, rows] of sheets) {
     let columns = 0;
@@ -77,7 +77,7 @@ function checkSheets(sheets: Workbook): void {
     checkSheetSize(name, rows.length, columns);
     total += rows.length * columns;
   }
-  checkCellCount(total);
+  checkCellCount(total, kind);
 }
 
 function readCsv(buffer: Buffer, file: string, separator: string | undefined, notes: string[]): Workbook {
@@ -137,8 +137,10 @@ async function checkPackage(buffer: Buffer, file: string): Promise<ZipEntry[]> {
           throw new LimitError(`'${file}' holds a text of at least ${scan.longest} characters (${entry.name}); a cell holds at most ${LIMITS.cellChars}`);
         }
         if (scan.rows > LIMITS.rows) throw new LimitError(`'${file}' has a sheet of more than ${LIMITS.rows} rows (${entry.name}); at most ${LIMITS.rows} are read`);
-        if (cellsBefore + scan.cells > LIMITS.cells) {
-          throw new LimitError(`'${file}' holds more than ${LIMITS.cells} cells (counted in its sheets' XML before loading); at most ${LIMITS.cells} are evaluated`);
+        if (cellsBefore + scan.cells > LIMITS.xlsxCells) {
+          throw new LimitError(
+            `'${file}' holds more than ${LIMITS.xlsxCells} cells (counted in its sheets' XML before loading); at most ${LIMITS.xlsxCells} are evaluated ${XLSX_CELLS_REASON}`,
+          );
         }
       });
     } catch (e) {
@@ -176,14 +178,14 @@ export async function loadInput(file: string, options: { separator?: string; wor
     const entries = await checkPackage(buffer, file);
     const { readWorkbookBuffer } = await import("./xlsx");
     const sheets = await readWorkbookBuffer(buffer);
-    checkSheets(sheets);
+    checkSheets(sheets, "xlsx");
     const libraryText = options.workbookLibrary ? workbookLibraryText(readAddinSettings(buffer, entries)) : null;
     return { kind: "xlsx", sheets, libraryText, notes };
   }
   if (ext === ".xlsx" || ext === ".xlsm") throw new InputError(`'${file}' is not an XLSX workbook (it is not a ZIP package)`);
   if (![".csv", ".tsv", ".txt"].includes(ext)) throw new InputError(`cannot read '${file}': use a .csv or .xlsx file`);
   const sheets = readCsv(buffer, file, options.separator ?? (ext === ".tsv" ? "\t" : undefined), notes);
-  checkSheets(sheets);
+  checkSheets(sheets, "csv");
   return { kind: "csv", sheets, libraryText: null, notes };
 }
 

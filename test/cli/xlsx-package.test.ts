@@ -64,7 +64,24 @@ test("within the byte limits, more cells than the limit: refused from the sheet'
   // 5 200 000 cells in 200 000 rows, 86 MB of XML (each a <c> with a value).
   const sheet = await deflatedRepeat(HEAD, row(26), 200_000, TAIL);
   expect(sheet.size).toBeLessThan(LIMITS.unpackedBytes);
-  expectRefused(packageWith(sheet, "many-cells.xlsx"), new RegExp(`holds more than ${LIMITS.cells} cells \\(counted in its sheets' XML before loading\\)`));
+  expectRefused(packageWith(sheet, "many-cells.xlsx"), new RegExp(`holds more than ${LIMITS.xlsxCells} cells \\(counted in its sheets' XML before loading\\)`));
+});
+
+test("a workbook's own cell limit (its reader's memory): just over it is refused before loading, with the reason", async () => {
+  // Below the CSV limit, above the workbook one: 60 000 rows of 26 cells.
+  expect(LIMITS.xlsxCells).toBeLessThan(LIMITS.cells);
+  const rows = Math.floor(LIMITS.xlsxCells / 26) + 1;
+  const sheet = await deflatedRepeat(HEAD, row(26), rows, TAIL);
+  expectRefused(
+    packageWith(sheet, "over-xlsx-cells.xlsx"),
+    new RegExp(`holds more than ${LIMITS.xlsxCells} cells .* at most ${LIMITS.xlsxCells} are evaluated from an XLSX workbook, whose reader needs about 1 kB of memory a cell \\(a CSV file may span ${LIMITS.cells}\\)`),
+  );
+});
+
+test("a workbook whose rectangle (A1 to the last filled cell) passes its limit, with few cells: refused after loading", async () => {
+  const rows = Math.floor(LIMITS.xlsxCells / 1000) + 1;
+  const sheet = await deflatedRepeat(HEAD, '<row r="1"><c r="A1"><v>1</v></c></row>', 1, `<row r="${rows}"><c r="ALL${rows}"><v>2</v></c></row>${TAIL}`);
+  expectRefused(packageWith(sheet, "wide-rectangle.xlsx"), new RegExp(`span ${rows * 1000} cells .* at most ${LIMITS.xlsxCells} are evaluated from an XLSX workbook`));
 });
 
 test("more rows than the limit: refused from the sheet's XML before loading", async () => {
