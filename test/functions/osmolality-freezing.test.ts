@@ -1,6 +1,6 @@
 /**
  * AQ.OSMOLALITY through the spreadsheet engine against a published freezing-point table
- * (test/reference/crc-freezing-point-electrolytes.json; docs/references.md, section 9): the salt at
+ * (test/reference/crc-freezing-point-electrolytes.json; docs/references.md, section 11): the salt at
  * the tabulated molality, 0 °C, ΔT = Kf·Osm; and a sucrose solution's freezing point (sucrose-freezing-point.json). Rows beyond the tolerance are known deviations of the
  * Davies model, asserted to stay within their bound.
  */
