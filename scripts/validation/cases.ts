@@ -140,7 +140,7 @@ function casesOfGroup(group: string, key: string): ValidationCase[] {
       expected: c.expected,
       printed: t.equation ? undefined : c.printed,
       expectedFrom: t.equation ? `${t.equation.text}${printedNote(t)}` : undefined,
-      status: t.status,
+      status: c.status ?? t.status,
       unit: c.unit ?? t.unit,
       tolerance: c.tolerance,
       knownDeviation: c.knownDeviation,

@@ -1,7 +1,8 @@
 /**
  * The "pitzer" activity model (src/chem/activity/pitzer.ts, src/chem/pitzer-iteration.ts) against
  * published data, each table's source and tolerance in test/reference:
- * - mean activity and osmotic coefficients of NaCl and KCl to 1 mol/kg (Hamer & Wu 1972);
+ * - mean activity and osmotic coefficients of NaCl and KCl to 1 mol/kg (γ± to 0.6 mol/kg seen in Kaye & Laby;
+ *   γ± at 0.5 and 1.0 and every φ recalled from Hamer & Wu 1972: each row's status in the file);
  * - the McIlvaine citrate–phosphate series (McIlvaine 1921), ionic strength up to ≈ 0.6 mol/L;
  * - the primary standards and the Sørensen phosphate table, with their own files' tolerances;
  * and identities: the Debye–Hückel limit, Gibbs–Duhem consistency of γ and φ.

@@ -66,6 +66,7 @@ describe("reference tables", () => {
                 : c.substance !== undefined && (c.factor ?? 0) > 0;
         expect({ id: c.id, needs }).toEqual({ id: c.id, needs: true });
         if (!t.equation && c.printed !== undefined) expect({ id: c.id, printed: Number(c.printed) }).toEqual({ id: c.id, printed: c.expected });
+        if (c.status !== undefined) expect({ id: c.id, status: ["V", "X"].includes(c.status) && (c.status === t.status || t.status === "X") }).toEqual({ id: c.id, status: true });
         if (c.knownDeviation) expect({ id: c.id, bound: c.knownDeviation.bound > c.tolerance.value && c.knownDeviation.reason.length > 20 }).toEqual({ id: c.id, bound: true });
       }
     }

@@ -35,6 +35,8 @@ export interface ReferenceCase {
   label?: string;
   /** The case's own source when it differs from the table's (a compilation of several papers). */
   source?: string;
+  /** The case's own status when the table mixes rows seen in their source (V) with cross-checked ones (X). */
+  status?: "V" | "X";
   temperatureC?: number;
   /** Library names (as a user types them) with mol/L in the final solution. */
   mixture?: [string, number][];
