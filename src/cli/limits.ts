@@ -12,8 +12,15 @@ export const LIMITS = {
   rows: 200_000,
   /** Columns of one sheet (the last filled column). */
   columns: 1_000,
-  /** Cells of the rectangle from A1 to the last filled row and column, all sheets together. */
-  cells: 5_000_000,
+  /**
+   * Cells of the rectangle from A1 to the last filled row and column, all sheets together, for a CSV
+   * file: the headless engine holds about 0.5 kB a cell. Measured peak of `protolyte sheet F.csv`
+   * (/usr/bin/time -f %M, 2026-12-03; 25 columns: 24 numbers and a formula per row): 1.80 GB for
+   * 3 500 000 cells, 1.96 GB for 4 000 000, 2.46 GB for 5 000 000 (the limit before); short texts
+   * instead of numbers, 1.58 GB for 3 500 000. This keeps a CSV within the same 2 GB budget as a
+   * workbook.
+   */
+  cells: 3_500_000,
   /**
    * The same for an XLSX workbook (and its <c> elements, counted before loading): exceljs, which
    * reads it, holds about 1 kB a cell. Measured peak (scripts/xlsx-memory.ts, 2026-12-03): 0.94 GB
