@@ -108,7 +108,7 @@ describe("phosphate buffers with NaCl, Pitzer (test/reference/phosphate-saline.j
 
 describe("primary standards under Pitzer (test/reference/ph-standards.json)", () => {
   // Issue 20: the standards unchanged within 0.01 from the default model. On the Bates–Guggenheim
-  // scale every standard stays within 0.007 of Davies; the equimolal and 1:3.5 phosphate standards
+  // scale every standard stays within 0.008 of Davies; the equimolal and 1:3.5 phosphate standards
   // read 0.014–0.015 above pH(S) at 25 °C and 0.022 at 38 °C (Davies: 0.011 and 0.015), so the
   // file's ±0.02 is widened to ±0.025 here for that reason.
   test.each(casesOf("ph-standards"))("$id: $label at $temperatureC °C, pH(S) $printed", (c) => {
