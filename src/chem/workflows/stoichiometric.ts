@@ -32,22 +32,35 @@ export function stoichiometricVolumes(mix: Mixture, titrant: Component, stockCon
   const q = strongCharge(titrant);
   if (q === null) return [];
   let S0 = 0;
-  const steps: { pKa: number; conc: number }[] = [];
+  // One entry per dissociation step of each system, summed over the forms that carry it: two forms
+  // of one system (a base and its salt) share its steps, they do not each add a step of their own.
+  const steps = new Map<string, { pKa: number; conc: number }>();
   for (const { component, conc } of mix) {
     for (const { ion, stoich } of component.ions) S0 += ion.charge * stoich * conc;
     for (const { system, stoich } of component.systems) {
       S0 += system.topCharge * stoich * conc;
-      for (const step of system.steps) steps.push({ pKa: step.pKa, conc: stoich * conc });
+      system.steps.forEach((step, i) => {
+        const key = `${system.id}\u0000${i}`;
+        const entry = steps.get(key);
+        if (entry) entry.conc += stoich * conc;
+        else steps.set(key, { pKa: step.pKa, conc: stoich * conc });
+      });
     }
   }
-  steps.sort((a, b) => a.pKa - b.pKa);
-  const out: number[] = [];
+  const ordered = [...steps.values()].sort((a, b) => a.pKa - b.pKa);
+  const found: number[] = [];
   let b = 0;
-  for (let k = 0; k <= steps.length; k++) {
-    if (k > 0) b += steps[k - 1].conc;
+  for (let k = 0; k <= ordered.length; k++) {
+    if (k > 0) b += ordered[k - 1].conc;
     const v = ((b - S0) / (q * stockConc)) * volume;
+    if (v > 0 && v <= maxVolume * (1 + 1e-12)) found.push(v);
+  }
+  // An acid titrant reaches the steps from the top down: sort by volume, then drop repeats.
+  found.sort((x, y) => x - y);
+  const out: number[] = [];
+  for (const v of found) {
     const last = out[out.length - 1];
-    if (v > 0 && v <= maxVolume * (1 + 1e-12) && (last === undefined || v > last * (1 + 1e-12))) out.push(v);
+    if (last === undefined || v > last * (1 + 1e-12)) out.push(v);
   }
   return out;
 }
