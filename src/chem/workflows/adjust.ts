@@ -122,7 +122,9 @@ function measuredState(mix: Mixture, measured: number, chem: ChemOptions): Resul
   const reagent = start.value < 0 ? STRONG_BASE : STRONG_ACID;
   const r = adjustPerLitre(mix, reagent, measured, chem);
   if (!r.ok) {
-    const why = r.code === "unreachable" ? `no excess of ${reagent.name} explains it (${r.message})` : r.message;
+    // The search's own message calls the measured pH "the target": say what it is here.
+    const inner = r.message.replace(/\bthe target\b/g, "the measured pH");
+    const why = r.code === "unreachable" || r.code === "beyond-limit" ? `no excess of ${reagent.name} explains it: ${inner.charAt(0).toLowerCase()}${inner.slice(1)}` : r.message;
     return fail(r.code, `The measured pH ${fmtPH(measured, computedPH)} differs from the computed ${fmtPH(computedPH, measured)}, and ${why}`);
   }
   const excess: AdjustExcess = { reagent: reagent === STRONG_BASE ? "strong base" : "strong acid", conc: r.value, computedPH };

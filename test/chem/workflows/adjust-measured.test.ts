@@ -49,6 +49,17 @@ describe("adjust from a measured pH", () => {
     f.expectRel(same.value, plain.value, 1e-9, "titrant");
   });
 
+  // 50 mM acetic acid: strong base up to the 1 mol/L ionic-strength limit reaches pH ≈ 13.9, so a
+  // reading of 14.5 is explained by no excess. The message says so, and does not call the reading
+  // "the target" (the target is 5).
+  test("a measured pH that no excess explains is refused with that reason", () => {
+    const r = adjust(f.mixture([f.aceticAcid, 0.05]), f.NaOH, 5, { measuredPH: 14.5 });
+    expect(r.ok).toBe(false);
+    if (r.ok) return;
+    expect(r.message).toMatch(/measured pH 14\.50 differs from the computed .*no excess of strong base explains it/);
+    expect(r.message).not.toMatch(/target 14\.50/);
+  });
+
   test.each([NaN, 20, -3])("measured pH %p is refused", (m) => {
     expect(adjust(phosphate, f.HCl, 7, { measuredPH: m })).toMatchObject({ ok: false, code: "bad-input", message: expect.stringMatching(/measured pH/) });
   });
