@@ -19,11 +19,15 @@ test("an unverified value that names the source it was recalled from says both",
 });
 
 test("unverified and common-practice values say so", () => {
-  expect(describeProvenance(step("sorbate", 0).pKa, lookup)).toMatch(/^from memory, unverified/);
+  expect(describeProvenance(step("meglumine", 0).pKa, lookup)).toMatch(/^from memory, unverified/);
   expect(describeProvenance(step("sulfate", 0).pKa, lookup)).toMatch(/^common practice: the first step is treated as fully dissociated/);
   expect(describeProvenance({ value: 1, unit: "1", conditions: "x", status: "unverified", note: "supplier sheet" }, lookup)).toBe(
     "from memory, unverified: supplier sheet",
   );
+});
+
+test("a value read in an anonymous web copy names the copy and the line read", () => {
+  expect(describeProvenance(step("sorbate", 0).pKa, lookup)).toBe("Sorbic Acid (drug-encyclopedia monograph) — Properties: pK (25°) = 4.76");
 });
 
 test("a dangling source id is shown, not hidden", () => {
