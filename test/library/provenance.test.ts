@@ -26,8 +26,10 @@ test("unverified and common-practice values say so", () => {
   );
 });
 
-test("a value read in an anonymous web copy names the copy and the line read", () => {
-  expect(describeProvenance(step("sorbate", 0).pKa, lookup)).toBe("Sorbic Acid (drug-encyclopedia monograph) — Properties: pK (25°) = 4.76");
+test("an unverified value seen in an unattributed web copy stays unverified and names the copy and the line read", () => {
+  expect(describeProvenance(step("sorbate", 0).pKa, lookup)).toMatch(
+    /^from memory, unverified: .*not counted as published \[Sorbic Acid \(drug-encyclopedia monograph\) — Properties: pK \(25°\) = 4\.76\]$/,
+  );
 });
 
 test("a dangling source id is shown, not hidden", () => {
