@@ -54,7 +54,7 @@ function concentrationInName(library: Library, name: string): string | null {
   const r = library.resolve(base.trim());
   if (!r.ok) return null;
   const n = r.component.name;
-  return `'${name}' is ${n} with a concentration: give the name alone ('${n}'), the concentration in amounts; a strength beside a name is read only for titrants and RECIPE forms.`;
+  return `'${name}' is ${n} with a concentration: give the name alone ('${n}') and any amount where the function asks for one; a strength beside a name is read only for titrants and RECIPE's two forms.`;
 }
 
 /** A substance by any alias, or #VALUE! naming the closest known substances. Cached per library. */

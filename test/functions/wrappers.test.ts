@@ -77,9 +77,9 @@ describe("errors are spreadsheet error values with a message", () => {
     ["PKA step that does not exist", () => AQ.PKA("phosphate", 4), /step 4 does not exist/],
     ["PKA of a polyprotic system without a step", () => AQ.PKA("citric acid", null as unknown as number), /give step 1 to 3/],
     ["MOLARMASS of an unknown form", () => AQ.MOLARMASS("unobtainium"), /Unknown substance/],
-    // A concentration typed into a name: the message names the substance and where the amount goes.
-    ["a mass fraction typed into a name", () => AQ.PH([["HCl 37 % w/w"], ["Tris base"]], [[0.01], [0.05]]), /'HCl 37 % w\/w'.*hydrochloric acid.*amounts/],
-    ["a stock concentration typed into a name", () => AQ.PH([["1 M NaOH"]], [[0.01]]), /'1 M NaOH'.*sodium hydroxide.*amounts/],
+    // A concentration typed into a name: the message names the substance and says to give the name alone.
+    ["a mass fraction typed into a name", () => AQ.PH([["HCl 37 % w/w"], ["Tris base"]], [[0.01], [0.05]]), /'HCl 37 % w\/w' is hydrochloric acid with a concentration: give the name alone/],
+    ["a stock concentration typed into a name", () => AQ.PH([["1 M NaOH"]], [[0.01]]), /'1 M NaOH' is sodium hydroxide with a concentration: give the name alone/],
   ])("%s → #VALUE!", (_what, call, message) => {
     const err = errorOf(call);
     expect(err.code).toBe("#VALUE!");
