@@ -22,11 +22,28 @@ export const DEFAULT_ROUNDING: Rounding = { significant: 6 };
  * (a balance's usual resolution at gram scale, common practice), anything else to 6.
  */
 export function roundingFor(formula: string): Rounding {
-  const head = /^\s*=?\s*AQ\.([A-Z_]+)\s*\(/i.exec(formula)?.[1]?.toUpperCase();
+  const call = /^\s*=?\s*AQ\.([A-Z_]+)\s*\(/i.exec(formula);
+  // Only a formula that is that one call: AQ.PH(…)/1000 is not a pH.
+  const head = call && isWholeCall(formula, call[0].length) ? call[1].toUpperCase() : undefined;
   if (head === "PH") return { decimals: 3 };
   if (head === "MOLARMASS") return { significant: 12 };
   if (head === "RECIPE") return { significant: 4 };
   return DEFAULT_ROUNDING;
+}
+
+/** True when the parenthesis opened just before `start` closes at the end of the formula (strings skipped). */
+function isWholeCall(formula: string, start: number): boolean {
+  let depth = 1;
+  let inString = false;
+  for (let i = start; i < formula.length; i++) {
+    const ch = formula[i];
+    if (inString) {
+      if (ch === '"') inString = false; // a doubled "" reopens at the next character
+    } else if (ch === '"') inString = true;
+    else if (ch === "(") depth++;
+    else if (ch === ")" && --depth === 0) return formula.slice(i + 1).trim() === "";
+  }
+  return false;
 }
 
 export function formatNumber(value: number, rounding: Rounding = DEFAULT_ROUNDING): string {

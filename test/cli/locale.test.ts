@@ -7,6 +7,7 @@ import { mkdtempSync, readFileSync, rmSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import ExcelJS from "exceljs";
+import { DEFAULT_ROUNDING, roundingFor } from "../../src/cli/format";
 import { requireBuild, run } from "./support/run";
 
 let dir = "";
@@ -114,6 +115,19 @@ describe("readable output", () => {
     // Acetic acid 0.1 mol/L: pH ≈ ½(pKa − log c) = ½(4.756 + 1) ≈ 2.88 (pKa: Goldberg et al. 2002), ±0.03 for activity.
     expect(Math.abs(Number(ph) - 2.878)).toBeLessThan(0.03);
     expect(run(["eval", "--digits", "2", '=AQ.PH("acetic acid",0.1)']).out).toBe(`${Number(ph).toPrecision(2)}\n`);
+  });
+
+  // The pH, molar-mass and recipe roundings are for a formula that is one call of that function: a
+  // number computed from it is not a pH (AQ.PH(…)/1000 = 0.002881 must not print as 0.003).
+  test("a function's own rounding only for a formula that is one call of it", () => {
+    expect(roundingFor('=AQ.PH("acetic acid",0.1)')).toEqual({ decimals: 3 });
+    expect(roundingFor(' = aq.ph("acetic acid", 0.1) ')).toEqual({ decimals: 3 });
+    expect(roundingFor('=AQ.PH("a)b",0.1)')).toEqual({ decimals: 3 });
+    expect(roundingFor('=AQ.PH("acetic acid",0.1)/1000')).toEqual(DEFAULT_ROUNDING);
+    expect(roundingFor('=AQ.PH("acetic acid",0.1)-AQ.PH("acetic acid",0.1,37)')).toEqual(DEFAULT_ROUNDING);
+    expect(roundingFor('=AQ.MOLARMASS("HCl")*2')).toEqual(DEFAULT_ROUNDING);
+    expect(roundingFor('=AQ.RECIPE("acetic acid","sodium acetate",4.76,0.1,1)*1000')).toEqual(DEFAULT_ROUNDING);
+    expect(roundingFor('=AQ.RECIPE("acetic acid","sodium acetate",4.76,0.1,1)')).toEqual({ significant: 4 });
   });
 
   test("a RECIPE table: grams to 4 significant figures", () => {
