@@ -94,3 +94,27 @@ function verdictOf(regime: Equilibrium["regime"], weakShare: number, nearest: Bu
   if (weakShare < BUFFERING.weakShareMin) return "not-buffered";
   return "buffer";
 }
+
+/** A pKa from memory, unverified, close enough to the pH to shape the result: its system, step (1-based) and pKa′. */
+export interface UnverifiedStep {
+  system: string;
+  step: number;
+  pKa: number;
+}
+
+/**
+ * The unverified pKa steps (PkaStep.unverified) of the systems present whose pKa′ lies within
+ * BUFFERING.weakDistance of the pH: nearer than that, at least 1 % of the pair is in its minor form,
+ * so the step's value moves the pH and the speciation; farther, it hardly does (rule 3 above).
+ */
+export function unverifiedStepsNear(eq: Equilibrium, systems: readonly AcidBaseSystem[], temperatureC: number, model: ActivityModel): UnverifiedStep[] {
+  const out: UnverifiedStep[] = [];
+  for (const system of systems) {
+    system.steps.forEach((step, j) => {
+      if (!step.unverified) return;
+      const pK = apparentPKa(system, j, temperatureC, eq.ionicStrength, model, "mixed");
+      if (pK.ok && Math.abs(eq.pH - pK.value) <= BUFFERING.weakDistance) out.push({ system: system.name, step: j + 1, pKa: pK.value });
+    });
+  }
+  return out;
+}

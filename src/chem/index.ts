@@ -38,7 +38,7 @@ export { log10Gamma } from "./activity/model";
 export { apparentPKa, osmolarity, ionicStrength, PKA_SCALES, type PKaScale } from "./derived";
 export { classifyRegime } from "./regime";
 export { parseDecimal, readDecimal, leadingDecimal, UNSIGNED_DECIMAL_SOURCE } from "./number-text";
-export { assessBuffering, BUFFERING, type BufferAssessment, type BufferVerdict } from "./buffering";
+export { assessBuffering, BUFFERING, unverifiedStepsNear, type BufferAssessment, type BufferVerdict, type UnverifiedStep } from "./buffering";
 export { beyondIonicLimit, ionicLimitFailure, fmtAgainst, sideOf, IONIC_LIMIT_TEXT, THRESHOLD_ROUNDING } from "./ionic-limit";
 export { parseQuantity, parseTemperatureTolerance, writtenVolumeUnit, type QuantityDimension, type ParseOptions, type WrittenVolumeUnit } from "./units";
 export * from "./workflows";

@@ -20,6 +20,8 @@ export interface PkaStep {
   dH?: number;
   /** Standard reaction heat-capacity change ΔrCp°, J/(K·mol). Missing means 0 (van 't Hoff with constant ΔrH°). */
   dCp?: number;
+  /** True when the pKa is not confirmed by a source (the library's status "unverified"): AQ.CHECK names it. */
+  unverified?: boolean;
 }
 
 /**

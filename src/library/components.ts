@@ -11,6 +11,7 @@ export function toSystem(r: SystemRecord): AcidBaseSystem {
     const step: PkaStep = { pKa: s.pKa.value };
     if (s.dH) step.dH = s.dH.value;
     if (s.dCp) step.dCp = s.dCp.value;
+    if (s.pKa.status === "unverified") step.unverified = true;
     return Object.freeze(step);
   });
   const sys: AcidBaseSystem = { id: r.id, name: r.name, topCharge: r.topCharge, steps: Object.freeze(steps) as PkaStep[] };

@@ -118,17 +118,39 @@ describe("AQ.CHECK: warnings and errors", () => {
     const text = check('=AQ.CHECK({"sorbic acid";"potassium sorbate"},{0.01;0.01},37)');
     expect(text).toMatch(/^CHECK: buffer/);
     expect(text).toMatch(/ΔrH° is unknown for sorbate/);
-    // and at 25 °C the same mixture needs no warning
-    expect(check('=AQ.CHECK({"sorbic acid";"potassium sorbate"},{0.01;0.01})')).toMatch(/^OK: buffer/);
+    // and at 25 °C the same mixture needs no temperature warning (its pKa, unverified, is still named)
+    expect(check('=AQ.CHECK({"sorbic acid";"potassium sorbate"},{0.01;0.01})')).not.toMatch(/ΔrH°/);
   });
 
   test("benzoate now carries a published ΔrH° and ΔrCp°: no temperature warning at 37 °C", () => {
     expect(check('=AQ.CHECK({"benzoic acid";"sodium benzoate"},{0.01;0.01},37)')).not.toMatch(/ΔrH° is unknown for benzoate/);
   });
 
-  test("a step without ΔrH° far from the pH is not reported (histidine pK1 ≈ 1.5 at pH 6 and 5 °C)", () => {
+  test("a step without ΔrH° far from the pH is not reported (histidine pK1 ≈ 1.8 at pH 6 and 5 °C)", () => {
     // histidine's carboxyl step has no ΔrH° in the library; at pH ≈ 6 it holds < 0.1 % of the system.
-    expect(check('=AQ.CHECK({"L-histidine";"L-histidine monohydrochloride monohydrate"},{0.01;0.01},5)')).toMatch(/^OK: buffer/);
+    const text = check('=AQ.CHECK({"L-histidine";"L-histidine monohydrochloride monohydrate"},{0.01;0.01},5)');
+    expect(text).toMatch(/^CHECK: buffer/);
+    expect(text).not.toMatch(/ΔrH°/);
+  });
+
+  describe("a pKa from memory, unverified, near the pH is named (status 'unverified' in the library)", () => {
+    test("histidine at pH 6: its imidazolium step (unverified) is named, its amino step (pKa′ > 8) is not", () => {
+      const text = check('=AQ.CHECK({"L-histidine";"L-histidine monohydrochloride monohydrate"},{0.01;0.01})');
+      expect(text).toMatch(/^CHECK: buffer, 0\.\d\d from pKa′ 6\.\d\d \(histidine\)/);
+      expect(text).toMatch(/The pKa of histidine step 2 \(pKa′ 6\.\d\d\) is from memory, unverified/);
+      expect(text).not.toMatch(/step 3/);
+    });
+
+    test("the same step more than 2 pH units away is not named: under 1 % of the pair is in its minor form", () => {
+      // 10 mM histidine hydrochloride with 10 mM HCl sits near pH 2.3, about 3.8 below the unverified
+      // imidazolium step (pKa ≈ 6.1); the near step there is the carboxyl (1.82, published).
+      const text = check('=AQ.CHECK({"L-histidine monohydrochloride monohydrate";"hydrochloric acid"},{0.01;0.01})');
+      expect(text).not.toMatch(/unverified/);
+    });
+
+    test("a system whose constants were seen in a source is not named (acetate, published)", () => {
+      expect(check('=AQ.CHECK({"acetic acid";"sodium acetate"},{0.05;0.05})')).toMatch(/^OK: buffer/);
+    });
   });
 
   test("bad input is still #VALUE! with a message", () => {

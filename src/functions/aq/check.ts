@@ -5,11 +5,12 @@
  * at least half of β, and the pH is within 1 of the nearest pKa′ of the system that buffers), with
  * no warning; otherwise "CHECK: …" with every reason: not a buffer (and why), weakly buffered,
  * overwhelmed by strong acid or base, the engine's warnings (ionic strength beyond the activity
- * model's range, ΔrH° unknown away from 25 °C), or the ionic-strength limit beyond which no pH is
+ * model's range, ΔrH° unknown away from 25 °C), a pKa from memory, unverified, within 2 of the pH
+ * (src/chem/buffering.ts, unverifiedStepsNear), or the ionic-strength limit beyond which no pH is
  * given (then no pH and no verdict that depends on it is quoted). Numbers are printed with enough
  * digits to be true against the thresholds they are compared with.
  */
-import { ACTIVITY_MODELS, assessBuffering, beyondIonicLimit, BUFFERING, fmtAgainst, IONIC_LIMIT_TEXT, LIMITS, sideOf, type BufferAssessment } from "../../chem";
+import { ACTIVITY_MODELS, assessBuffering, beyondIonicLimit, BUFFERING, fmtAgainst, IONIC_LIMIT_TEXT, LIMITS, sideOf, unverifiedStepsNear, type BufferAssessment, type UnverifiedStep } from "../../chem";
 import type { Cell } from "../args";
 import { readMixtureArgs } from "../mixture";
 import { orThrow } from "../errors";
@@ -58,6 +59,13 @@ function verdictText(a: BufferAssessment, eq: Equilibrium): string {
   }
 }
 
+function unverifiedText(steps: readonly UnverifiedStep[]): string {
+  if (steps.length === 0) return "";
+  const list = steps.map((s) => `${s.system} step ${s.step} (pKa′ ${s.pKa.toFixed(2)})`).join(", ");
+  const verb = steps.length === 1 ? "is" : "are";
+  return `The pKa of ${list} ${verb} from memory, unverified (no source seen): confirm ${steps.length === 1 ? "it" : "them"} before relying on this result.`;
+}
+
 export function check(names: Cell, amounts: Cell, temperature: Cell, activity: Cell): string {
   const { prepared } = readMixtureArgs(names, amounts);
   const options = chemOptions(temperature, activity);
@@ -67,6 +75,7 @@ export function check(names: Cell, amounts: Cell, temperature: Cell, activity: C
   }
   const a = assessBuffering(eq, prepared.aggregate.systems, options.temperatureC, options.activity);
   const state = `${verdictText(a, eq)}, ${ionicText(eq.ionicStrength, options.activity)}`;
-  if (a.verdict === "buffer" && eq.warnings.length === 0) return `OK: ${state}`;
-  return `CHECK: ${state}. ${eq.warnings.join(" ")}`.trim();
+  const unverified = unverifiedText(unverifiedStepsNear(eq, prepared.aggregate.systems, options.temperatureC, options.activity));
+  if (a.verdict === "buffer" && eq.warnings.length === 0 && unverified === "") return `OK: ${state}`;
+  return `CHECK: ${state}. ${[...eq.warnings, unverified].filter((w) => w !== "").join(" ")}`.trim();
 }
