@@ -7,10 +7,10 @@
  * answered from stale data — and checking which library is in effect costs one comparison, not a
  * fingerprint.
  */
-import { UNSIGNED_DECIMAL_SOURCE } from "../chem";
 import type { AcidBaseSystem, Component } from "../chem/types";
 import { getActiveLibrary, type Library } from "../library";
 import { badInput } from "./errors";
+import { nameWithoutStrength } from "./name-strength";
 
 /** The fingerprint of the constants in effect ("PL-1.0.0-3fa9c21b07"). */
 export function libraryKey(): string {
@@ -38,20 +38,15 @@ export function libraryScoped<T>(make: () => T): () => T {
 const NAME_CACHE_LIMIT = 2048;
 const nameCache = libraryScoped(() => new Map<string, Component | string>());
 
-/** A number with a unit or a percentage, as typed beside a name ("1 M", "0.5 mol/L", "37 % w/w"). */
-const QUANTITY = String.raw`(?:${UNSIGNED_DECIMAL_SOURCE})\s*(?:%\s*(?:\(?\s*[wmv]\s*\/\s*[wmv]\s*\)?)?|[a-zµμ]+(?:\s*\/\s*[a-z0-9]+)?)`;
-const QUANTITY_AFTER = new RegExp(String.raw`^(.*?\S)[\s,]*\(?\s*${QUANTITY}\s*\)?$`, "i");
-const QUANTITY_BEFORE = new RegExp(String.raw`^${QUANTITY}\s+(.*\S)$`, "i");
-
 /**
  * An unknown name that is a known substance with a concentration typed beside it ("HCl 37 % w/w",
  * "1 M NaOH"): the message for it, which says where the amount goes; null otherwise. (Where a stock
  * beside a name is meant — a titrant, a RECIPE form — aq/stock-name.ts reads it before this is asked.)
  */
 function concentrationInName(library: Library, name: string): string | null {
-  const base = QUANTITY_AFTER.exec(name)?.[1] ?? QUANTITY_BEFORE.exec(name)?.[1];
+  const base = nameWithoutStrength(name);
   if (base === undefined) return null;
-  const r = library.resolve(base.trim());
+  const r = library.resolve(base);
   if (!r.ok) return null;
   const n = r.component.name;
   return `'${name}' is ${n} with a concentration: give the name alone ('${n}') and any amount where the function asks for one; a strength beside a name is read only for titrants and RECIPE's two forms.`;

@@ -7,10 +7,11 @@
  * before the name).
  */
 import { reagentStock, glacialPercent, REAGENT_TABLE_TEMPERATURE_C, type ReagentStock } from "../../chem/reagents";
-import { readDecimal, UNSIGNED_DECIMAL_SOURCE } from "../../chem";
+import { readDecimal } from "../../chem";
 import { quantity, type Cell } from "../args";
 import { AqError, badInput, orThrow } from "../errors";
 import { resolveComponent } from "../substances";
+import { LEADING_CONC, LEADING_PERCENT, TRAILING_CONC, TRAILING_PERCENT } from "../name-strength";
 import type { Component } from "../../chem/types";
 
 export interface NamedStock {
@@ -21,20 +22,6 @@ export interface NamedStock {
   reagent?: ReagentStock;
 }
 
-/**
- * A number as the name's concentration starts ("1", "0.5", ".5", "1e-3"; number-text.ts), with a
- * decimal comma or a second point taken in too ("0,5 M", "1..2 M"), so that the concentration's
- * reader says what is wrong with it.
- */
-const NUMBER = String.raw`${UNSIGNED_DECIMAL_SOURCE}(?:[.,]\d+)*`;
-/** A concentration beside a name: a number and a unit ("1 M", "0.5 mol/L"). */
-const CONC = String.raw`${NUMBER}\s*[a-zµμ/]+(?:\/[a-z]+)?`;
-const TRAILING = new RegExp(String.raw`^(.*?\S)[\s,]*\(?\s*(${CONC})\s*\)?$`, "i");
-const LEADING = new RegExp(String.raw`^(${CONC})\s+(.*\S)$`, "i");
-/** A percentage with an optional basis: "37 %", "37 % w/w", "37 %(m/m)", "0.9 % w/v". */
-const PERCENT = String.raw`(${UNSIGNED_DECIMAL_SOURCE})\s*%\s*(?:\(?\s*([wmv])\s*\/\s*([wmv])\s*\)?)?`;
-const TRAILING_PERCENT = new RegExp(String.raw`^(.*?\S)[\s,]*\(?\s*${PERCENT}\s*\)?$`, "i");
-const LEADING_PERCENT = new RegExp(String.raw`^${PERCENT}\s+(.*\S)$`, "i");
 const GLACIAL = /^glacial\s+(.*\S)$/i;
 
 /** One-line description of a reagent as supplied, for tables: "hydrochloric acid 37 % w/w (12.02 mol/L, 1.184 g/mL at 20 °C)". */
@@ -94,9 +81,9 @@ export function resolveWithStock(name: string, what: string): NamedStock {
     firstError = error;
   }
   const splits: [string, string][] = [];
-  const t = TRAILING.exec(name);
+  const t = TRAILING_CONC.exec(name);
   if (t) splits.push([t[1], t[2]]);
-  const l = LEADING.exec(name);
+  const l = LEADING_CONC.exec(name);
   if (l) splits.push([l[2], l[1]]);
   for (const [base, conc] of splits) {
     let component: Component;
